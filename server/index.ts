@@ -1,0 +1,43 @@
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { loadConfig, ConfigError, type Config } from './config.js';
+import { createDb } from './db/knex.js';
+import { buildApp } from './app.js';
+import type { Knex } from 'knex';
+
+export type RunningServer = { server: Server; db: Knex; config: Config; url: string; stop(): Promise<void> };
+
+/** Starts the HTTP server; port 0 picks a free port (tests). */
+export async function startServer(config: Config = loadConfig()): Promise<RunningServer> {
+  const db = createDb(config.db);
+  const app = buildApp({ config, db });
+  const server = await new Promise<Server>((resolve) => {
+    const s = app.listen(config.port, config.host, () => resolve(s));
+  });
+  const { port } = server.address() as AddressInfo;
+  return {
+    server, db, config, url: `http://${config.host}:${port}`,
+    async stop() {
+      await new Promise<void>((resolve) => server.close(() => resolve()));
+      server.closeAllConnections();
+      await db.destroy();
+    },
+  };
+}
+
+const isMain = import.meta.url === `file://${process.argv[1]}`;
+if (isMain) {
+  try {
+    const running = await startServer();
+    console.log(`Fluxtrail API and app on ${running.config.publicUrl}`);
+    const shutdown = () => void running.stop().then(() => process.exit(0));
+    process.on('SIGTERM', shutdown);
+    process.on('SIGINT', shutdown);
+  } catch (error) {
+    if (error instanceof ConfigError) {
+      console.error(error.message);
+      process.exit(2);
+    }
+    throw error;
+  }
+}

@@ -1,0 +1,13 @@
+import { Router, json } from 'express';
+import type { AppDeps } from '../app.js';
+import { healthRouter } from './health.js';
+import { meRouter } from './me.js';
+
+/** Every API router, one per resource. */
+export function apiRouter({ db }: AppDeps) {
+  const router = Router();
+  router.use('/health', healthRouter(db));
+  router.use(json({ limit: '1mb' }));
+  router.use('/me', meRouter());
+  return router;
+}
