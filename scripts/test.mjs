@@ -43,7 +43,7 @@ try {
   }
   mkdirSync(join(root, '.data'), { recursive: true });
   code = await new Promise((resolveCode) => {
-    const child = spawn(process.execPath, [
+    const child = spawn(process.execPath, ['--import', 'tsx',
       join(root, 'node_modules/vitest/vitest.mjs'), 'run',
       '--reporter=default', '--reporter=json', `--outputFile.json=${join(root, '.data', 'test-report.json')}`,
       ...vitestArgs,

@@ -19,6 +19,9 @@ const eightHoursMs = 8 * 60 * 60 * 1000;
 /** Sessions live in MariaDB so several app processes can serve the same user. */
 export function sessionMiddleware(db: Knex, secret: string, secureCookie: boolean) {
   const store = new ConnectSessionKnexStore({ knex: db, tableName: 'sessions', createTable: false, cleanupInterval: 0 });
+  // The store checks its table at construction; when the database is down that check fails
+  // here, and again (handled) on each session look-up, which answers that request with an error.
+  store.ready.catch(() => undefined);
   return session({
     name: sessionCookieName,
     secret,

@@ -15,7 +15,7 @@ export function createDb(db: Config['db']): Knex {
       min: 0,
       max: db.poolMax,
       afterCreate: (conn: { query: (sql: string, cb: (err: Error | null) => void) => void }, done: (err: Error | null, conn: unknown) => void) => {
-        conn.query("SET time_zone = '+00:00', SESSION TRANSACTION ISOLATION LEVEL READ COMMITTED", (err) => done(err, conn));
+        conn.query("SET SESSION time_zone = '+00:00', SESSION tx_isolation = 'READ-COMMITTED'", (err) => done(err, conn));
       },
     },
     migrations: { directory: 'migrations', extension: 'ts', loadExtensions: ['.ts'] },
