@@ -85,11 +85,11 @@ export function signInPage({ uid, nonce, login = '', failed = false }: SignInPag
 <h1>Fluxtrail sign-in</h1>
 <p class="note">Demo identity provider — local accounts only</p>
 ${error}
-<form method="post" action="/interaction/${encodeURIComponent(uid)}/login" autocomplete="off">
+<form method="post" action="/interaction/${encodeURIComponent(uid)}/login">
 <label for="login">Login</label>
-<input id="login" name="login" value="${escapeHtml(login)}" required autocapitalize="none" spellcheck="false" ${login ? '' : 'autofocus'}>
+<input id="login" name="login" value="${escapeHtml(login)}" autocomplete="username" required autocapitalize="none" spellcheck="false" ${login ? '' : 'autofocus'}>
 <label for="password">Password</label>
-<input id="password" name="password" type="password" required ${login ? 'autofocus' : ''}>
+<input id="password" name="password" type="password" autocomplete="current-password" required ${login ? 'autofocus' : ''}>
 <button type="submit">Sign in</button>
 </form>
 <p class="hint">Accounts: <code>operator</code>, <code>quality</code>, <code>quality2</code>, <code>auditor</code>,
