@@ -6,7 +6,7 @@ type ErrorNoteProps = {
   title?: string;
 };
 
-/** Renders a failed request: the server's message, its stable code and any field problems. */
+/** Renders a failed request: the server's message, its stable code and its list of field problems (in server order). */
 export function ErrorNote({ error, title = 'Something went wrong' }: ErrorNoteProps) {
   const apiError = isApiError(error) ? error : undefined;
   const message = apiError?.message ?? 'An unexpected problem occurred in this screen.';
@@ -18,8 +18,8 @@ export function ErrorNote({ error, title = 'Something went wrong' }: ErrorNotePr
       <p className="mt-1">{message}</p>
       {apiError && apiError.fields.length > 0 ? (
         <ul className="mt-2 list-disc pl-5">
-          {apiError.fields.map(({ field, message: fieldMessage }) => (
-            <li key={`${field}:${fieldMessage}`}>
+          {apiError.fields.map(({ field, message: fieldMessage }, index) => (
+            <li key={`${index}:${field}`}>
               <span className="figures">{field}</span>: {fieldMessage}
             </li>
           ))}

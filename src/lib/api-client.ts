@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-/** One field-level problem reported by the server, e.g. `{ field: 'serial', message: 'Required' }`. */
+/** One field-level problem reported by the server, e.g. `{ field: 'results[3].value', message: 'Required' }`. */
 export type FieldProblem = { field: string; message: string };
 
 export class ApiError extends Error {
@@ -33,23 +33,16 @@ const errorBodySchema = z.object({
   error: z.object({
     code: z.string(),
     message: z.string(),
-    fields: z.record(z.string(), z.union([z.string(), z.array(z.string())])).optional(),
+    fields: z.array(z.object({ field: z.string(), message: z.string() })).optional(),
   }),
 });
-
-function toFieldProblems(fields: Record<string, string | string[]> | undefined): FieldProblem[] {
-  if (!fields) return [];
-  return Object.entries(fields).flatMap(([field, messages]) =>
-    (Array.isArray(messages) ? messages : [messages]).map((message) => ({ field, message })),
-  );
-}
 
 async function errorFromResponse(response: Response): Promise<ApiError> {
   const body: unknown = await response.json().catch(() => undefined);
   const parsed = errorBodySchema.safeParse(body);
   if (parsed.success) {
     const { code, message, fields } = parsed.data.error;
-    return new ApiError(response.status, code, message, toFieldProblems(fields));
+    return new ApiError(response.status, code, message, fields);
   }
   return new ApiError(response.status, `http_${response.status}`, response.statusText || 'Request failed');
 }
