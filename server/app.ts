@@ -49,5 +49,5 @@ function serveClient(app: express.Express, staticDir: string) {
   const root = resolve(staticDir);
   if (!existsSync(root)) return;
   app.use(express.static(root, { index: false, maxAge: '1h' }));
-  app.get('/{*splat}', (_req, res) => res.sendFile(resolve(root, 'index.html')));
+  app.get('/{*splat}', (_req, res) => res.sendFile('index.html', { root, maxAge: 0 }));
 }
