@@ -13,7 +13,8 @@ try {
       console.log(`Demo plant already seeded (${seeded.meta_value}); keeping the data.`);
     } else {
       console.log('Seeding the demo plant…');
-      await db.seed.run();
+      const [files] = await db.seed.run();
+      if (files.length === 0) throw new Error('No seed files found in seeds/; the demo plant cannot be seeded.');
       await db('app_meta').insert({ meta_key: 'demo_seeded_at', meta_value: new Date().toISOString(), updated_at: new Date() });
       console.log('Demo plant seeded.');
     }
