@@ -2,6 +2,7 @@ import { Router, json } from 'express';
 import type { AppDeps } from '../app.js';
 import { healthRouter } from './health.js';
 import { meRouter } from './me.js';
+import { setupRouter } from './v1/setup/index.js';
 
 /** Every API router, one per resource. */
 export function apiRouter({ db }: AppDeps) {
@@ -9,5 +10,6 @@ export function apiRouter({ db }: AppDeps) {
   router.use('/health', healthRouter(db));
   router.use(json({ limit: '1mb' }));
   router.use('/me', meRouter());
+  router.use('/v1/setup', setupRouter(db));
   return router;
 }
