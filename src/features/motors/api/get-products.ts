@@ -3,11 +3,7 @@ import { z } from 'zod';
 import { apiClient } from '../../../lib/api-client';
 
 const productSchema = z.object({ code: z.string(), name: z.string(), motorKind: z.string() });
-// The list may come bare or wrapped as { items }; both mean the same list.
-const productListSchema = z.union([
-  z.array(productSchema),
-  z.object({ items: z.array(productSchema) }).transform(({ items }) => items),
-]);
+const productListSchema = z.object({ items: z.array(productSchema) }).transform(({ items }) => items);
 export type Product = z.infer<typeof productSchema>;
 
 export function getProducts(signal?: AbortSignal): Promise<Product[]> {

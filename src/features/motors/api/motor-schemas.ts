@@ -21,7 +21,7 @@ export type Measurement = z.infer<typeof measurementSchema>;
 
 export const waveformSchema = z.object({
   kind: z.string(),
-  summary: z.record(z.string(), z.unknown()),
+  summary: z.unknown(),
 });
 export type Waveform = z.infer<typeof waveformSchema>;
 
@@ -43,19 +43,23 @@ export const runSchema = z.object({
 export type TestRun = z.infer<typeof runSchema>;
 
 export const holdSchema = z.object({
-  id: z.union([z.number(), z.string()]),
+  id: z.number(),
+  target: z.discriminatedUnion('type', [
+    z.object({ type: z.literal('motor'), serial: z.string() }),
+    z.object({ type: z.literal('lot'), code: z.string() }),
+  ]),
   kind: z.string(),
   reason: z.string(),
   placedBy: z.string(),
   placedAt: z.string(),
   releasedBy: z.string().nullish(),
   releasedAt: z.string().nullish(),
-  scope: z.enum(['motor', 'lot']),
+  releaseReason: z.string().nullish(),
 });
 export type Hold = z.infer<typeof holdSchema>;
 
 export const reworkNoteSchema = z.object({
-  id: z.union([z.number(), z.string()]),
+  id: z.number(),
   action: z.enum(['rework', 'retest']),
   note: z.string(),
   recordedBy: z.string(),
@@ -64,10 +68,13 @@ export const reworkNoteSchema = z.object({
 export type ReworkNote = z.infer<typeof reworkNoteSchema>;
 
 export const auditEventSchema = z.object({
-  id: z.union([z.number(), z.string()]),
+  id: z.number(),
   occurredAt: z.string(),
   actor: z.string(),
+  actorRole: z.string().nullish(),
   action: z.string(),
+  entityType: z.string(),
+  entityId: z.string(),
   reason: z.string().nullish(),
 });
 export type AuditEvent = z.infer<typeof auditEventSchema>;
@@ -77,7 +84,7 @@ export const motorRecordSchema = z.object({
   product: z.object({ code: z.string(), name: z.string(), motorKind: z.string() }),
   lot: z.object({
     code: z.string(),
-    components: z.array(z.object({ kind: z.string(), supplierLotCode: z.string() })),
+    components: z.array(z.object({ kind: z.string(), supplierLotCode: z.string(), supplier: z.string().nullish() })),
   }),
   status: motorStatusSchema,
   holds: z.array(holdSchema),

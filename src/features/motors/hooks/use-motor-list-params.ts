@@ -14,7 +14,12 @@ export type FilterKey = (typeof filterKeys)[number];
 const historyStateSchema = z.object({ previousCursors: z.array(z.string()) });
 
 const dayStart = (day: string) => new Date(`${day}T00:00:00`).toISOString();
-const dayEnd = (day: string) => new Date(`${day}T23:59:59.999`).toISOString();
+// The server's `to` is exclusive, so "tested to 3 Dec" asks for everything before 4 Dec 00:00 local time.
+const dayAfter = (day: string) => {
+  const next = new Date(`${day}T00:00:00`);
+  next.setDate(next.getDate() + 1);
+  return next.toISOString();
+};
 
 /** The Motors list's filters, sort and page, read from and written to the URL search params. */
 export function useMotorListParams() {
@@ -38,7 +43,7 @@ export function useMotorListParams() {
     status: status.success ? status.data : undefined,
     station: filters.station || undefined,
     from: filters.from ? dayStart(filters.from) : undefined,
-    to: filters.to ? dayEnd(filters.to) : undefined,
+    to: filters.to ? dayAfter(filters.to) : undefined,
     serialPrefix: filters.serialPrefix || undefined,
   };
   const query: MotorListQuery = { ...serverFilters, sort, order, limit: motorPageSize, cursor };

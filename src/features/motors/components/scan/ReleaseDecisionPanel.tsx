@@ -43,7 +43,7 @@ export function ReleaseDecisionPanel({ serial, release }: ReleaseDecisionPanelPr
         <ul aria-label="Active holds" className="mt-4 space-y-2">
           {release.activeHolds.map((hold) => (
             <li key={hold.id} className="rounded-md border border-hold bg-white/70 px-4 py-2 text-lg text-graphite-900">
-              <span className="font-semibold">{hold.scope === 'lot' ? 'Lot hold' : 'Motor hold'}:</span> {hold.reason}
+              <span className="font-semibold">{hold.target.type === 'lot' ? 'Lot hold' : 'Motor hold'}:</span> {hold.reason}
               <span className="block text-sm text-graphite-500">
                 placed by {hold.placedBy}, {formatDateTime(hold.placedAt)}
               </span>
