@@ -2,6 +2,7 @@ import { controlChartConstants } from './constants.js';
 
 /** Small sample statistics shared by the charts and the capability study. */
 
+/** Arithmetic mean. */
 export function mean(values: readonly number[]): number {
   let sum = 0;
   for (const v of values) sum += v;
@@ -28,6 +29,7 @@ export function sigmaFromMovingRange(values: readonly number[]): number {
   return averageMovingRange(values) / controlChartConstants(2).d2;
 }
 
+/** Subgroup range R = max − min (NIST/SEMATECH §6.3.2.1). */
 export function range(values: readonly number[]): number {
   let min = Infinity;
   let max = -Infinity;

@@ -105,10 +105,12 @@ export const allNelsonRules: readonly RuleName[] = Object.freeze([
 /** The four Western Electric zone rules (Statistical Quality Control Handbook, 1956). */
 export const allWesternElectricRules: readonly RuleName[] = Object.freeze(['we-1', 'we-2', 'we-3', 'we-4']);
 
+/** Type guard for rule names coming from callers (API input, stored chart settings). */
 export function isRuleName(value: unknown): value is RuleName {
   return typeof value === 'string' && Object.prototype.hasOwnProperty.call(CATALOG, value);
 }
 
+/** The pattern behind a rule, as listed in Nelson (1984) / Western Electric (1956). */
 export function rulePattern(rule: RuleName): RulePattern {
   return CATALOG[rule].pattern;
 }

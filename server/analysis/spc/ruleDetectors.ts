@@ -30,6 +30,7 @@ function direction(values: readonly number[], i: number): number {
   return i === 0 ? 0 : Math.sign(values[i] - values[i - 1]);
 }
 
+/** Finds every completion of one pattern in one pass over the points. */
 export function detectPattern(
   pattern: RulePattern,
   values: readonly number[],

@@ -16,6 +16,7 @@ export interface SubgroupSummary {
   representativeSize: number;
 }
 
+/** Checks subgroup sizes (minSize…maxSize, all values finite) and summarises them. */
 export function summarizeSubgroups(
   subgroups: readonly (readonly number[])[],
   minSize: number,

@@ -3,6 +3,7 @@
  * a caller (or an API error body) can tell exactly which input was wrong.
  */
 
+/** An array of at least minLength finite numbers. */
 export function requireFiniteArray(name: string, values: readonly number[], minLength: number): void {
   if (!Array.isArray(values)) throw new Error(`${name} must be an array of numbers`);
   if (values.length < minLength) {
@@ -15,17 +16,20 @@ export function requireFiniteArray(name: string, values: readonly number[], minL
   }
 }
 
+/** A finite number (not NaN, not ±Infinity). */
 export function requireFinite(name: string, value: number): void {
   if (typeof value !== 'number' || !Number.isFinite(value)) {
     throw new Error(`${name} must be a finite number, got ${String(value)}`);
   }
 }
 
+/** A finite number greater than zero. */
 export function requirePositive(name: string, value: number): void {
   requireFinite(name, value);
   if (value <= 0) throw new Error(`${name} must be greater than 0, got ${value}`);
 }
 
+/** An integer from min to max inclusive. */
 export function requireIntegerInRange(name: string, value: number, min: number, max: number): void {
   if (!Number.isInteger(value) || value < min || value > max) {
     throw new Error(`${name} must be an integer from ${min} to ${max}, got ${String(value)}`);

@@ -32,7 +32,7 @@ describe('ewmaChart', () => {
   });
 
   it('when given the NIST example, then no point is out of control', () => {
-    // NIST/SEMATECH §6.3.2.4: "none of the EWMA values fall outside the control limits"
+    // NIST/SEMATECH §6.3.2.4, as quoted in DOMAIN.md: no point out of control
     expect(chart.points).toHaveLength(20);
     expect(chart.points.filter((p) => p.outOfControl)).toEqual([]);
   });

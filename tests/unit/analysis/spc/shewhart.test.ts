@@ -36,6 +36,7 @@ describe('individualsChart', () => {
   });
 });
 
+// made-up resistance readings in mΩ
 const FOUR_EACH = [
   [10.2, 9.9, 10.4, 10.1],
   [9.8, 10.0, 10.3, 9.7],
@@ -95,11 +96,12 @@ describe('xbarRChart', () => {
   });
 });
 
+// made-up bore diameters in mm; the checks are against table factors, not a book's results
 const FIVE_EACH = [
-  [74.03, 74.002, 74.019, 73.992, 74.008],
-  [73.995, 73.992, 74.001, 74.011, 74.004],
-  [73.988, 74.024, 74.021, 74.005, 74.002],
-  [74.002, 73.996, 73.993, 74.015, 74.009],
+  [52.031, 52.004, 52.017, 51.994, 52.01],
+  [51.996, 51.99, 52.003, 52.012, 52.005],
+  [51.987, 52.022, 52.018, 52.006, 52.001],
+  [52.003, 51.998, 51.991, 52.014, 52.011],
 ];
 
 /** c₄(n) from jstat's gamma function, the reference for the X̄-S checks. */
