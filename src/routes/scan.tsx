@@ -30,7 +30,7 @@ function SerialNotFound({ serial }: { serial: string }) {
 
 function FoundMotor({ serial, onDialogClosed }: { serial: string; onDialogClosed: () => void }) {
   // Reads the record the lookup just fetched; it refreshes by itself after a rework note is saved.
-  const { data } = useMotor(serial);
+  const { data } = useMotor(serial, 10_000);
   const canRework = useCan('rework:record');
   const canRetest = useCan('retest:request');
   if (!data) return <LoadingScreen label="Looking up the serial…" />;

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiClient, isApiError } from '../../../lib/api-client';
+import { apiClient } from '../../../lib/api-client';
 import { motorRecordSchema, type MotorRecord } from './motor-schemas';
 
 export const motorQueryKey = (serial: string) => ['motors', 'record', serial] as const;
@@ -12,10 +12,11 @@ export const motorQueryOptions = (serial: string) =>
   queryOptions({
     queryKey: motorQueryKey(serial),
     queryFn: ({ signal }) => getMotor(serial, signal),
-    // An unknown serial is an answer, not a hiccup: show "Serial not found" at once.
-    retry: (failureCount, error) => !(isApiError(error) && error.status < 500) && failureCount < 2,
+    // Whether a motor may ship changes with every hold and retest: always ask again when a screen opens.
+    staleTime: 0,
   });
 
-export function useMotor(serial: string, { enabled = true }: { enabled?: boolean } = {}) {
-  return useQuery({ ...motorQueryOptions(serial), enabled: enabled && serial !== '' });
+/** `staleTimeMs` lets a screen that has just fetched the record (Scan) skip asking twice. */
+export function useMotor(serial: string, staleTimeMs = 0) {
+  return useQuery({ ...motorQueryOptions(serial), staleTime: staleTimeMs });
 }
