@@ -1,0 +1,50 @@
+/**
+ * Argument checks for the waveform analyses. Each throws an Error whose message names the
+ * argument and the reason, so a bad test record points at its own field.
+ */
+
+/** Samples as a test stand sends them: a plain array or a typed array of volts or degrees. */
+export type Samples = readonly number[] | Float64Array;
+
+export function requirePositive(name: string, value: number): number {
+  if (typeof value !== 'number' || !Number.isFinite(value) || value <= 0) {
+    throw new Error(`${name} must be a finite number greater than zero, got ${String(value)}`);
+  }
+  return value;
+}
+
+export function requirePositiveInteger(name: string, value: number): number {
+  requirePositive(name, value);
+  if (!Number.isInteger(value)) throw new Error(`${name} must be a whole number, got ${value}`);
+  return value;
+}
+
+/**
+ * Samples as a Float64Array after checking that every one is a finite number. A Float64Array is
+ * used as it is (the analyses only read it); a plain array is copied.
+ */
+export function toFiniteSamples(name: string, values: Samples): Float64Array {
+  if (!(values instanceof Float64Array) && !Array.isArray(values)) {
+    throw new Error(`${name} must be an array of numbers`);
+  }
+  for (let i = 0; i < values.length; i++) {
+    const value = values[i];
+    // Checked on the original because a typed-array copy would turn null into 0.
+    if (typeof value !== 'number' || !Number.isFinite(value)) {
+      throw new Error(`${name}[${i}] must be a finite number, got ${String(value)}`);
+    }
+  }
+  return values instanceof Float64Array ? values : new Float64Array(values);
+}
+
+/** Requires every named record to hold the same number of samples as the first. */
+export function requireSameLength(records: ReadonlyArray<readonly [string, { length: number }]>): void {
+  const [firstName, first] = records[0];
+  for (const [name, record] of records) {
+    if (record.length !== first.length) {
+      throw new Error(
+        `${name} must hold as many samples as ${firstName} (${first.length}), got ${record.length}`,
+      );
+    }
+  }
+}
