@@ -3,6 +3,7 @@ import type { AddressInfo } from 'node:net';
 import { loadConfig, ConfigError, type Config } from './config.js';
 import { createDb } from './db/knex.js';
 import { buildApp } from './app.js';
+import { startJobs } from './jobs/start-jobs.js';
 import type { Knex } from 'knex';
 
 export type RunningServer = { server: Server; db: Knex; config: Config; url: string; stop(): Promise<void> };
@@ -15,9 +16,11 @@ export async function startServer(config: Config = loadConfig()): Promise<Runnin
     const s = app.listen(config.port, config.host, () => resolve(s));
   });
   const { port } = server.address() as AddressInfo;
+  const jobs = config.jobsEnabled ? startJobs({ db, config }) : undefined;
   return {
     server, db, config, url: `http://${config.host}:${port}`,
     async stop() {
+      await jobs?.stop();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       server.closeAllConnections();
       await db.destroy();

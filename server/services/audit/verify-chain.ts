@@ -5,9 +5,14 @@ export type ChainVerdict = { ok: boolean; checked: number; firstBrokenId?: numbe
 
 type AuditRow = {
   id: number | string; occurred_at: Date; actor: string; actor_role: string | null; action: string;
-  entity_type: string; entity_id: string; before_json: string | null; after_json: string | null;
+  entity_type: string; entity_id: string; before_json: unknown; after_json: unknown;
   reason: string | null; prev_hash: string; hash: string;
 };
+
+/** mysql2 hands a JSON column back parsed or as text, depending on how MariaDB reports its type. */
+function jsonValue(value: unknown): unknown {
+  return typeof value === 'string' ? JSON.parse(value) : value ?? null;
+}
 
 function contentOf(row: AuditRow): AuditContent {
   return {
@@ -17,8 +22,8 @@ function contentOf(row: AuditRow): AuditContent {
     action: row.action,
     entityType: row.entity_type,
     entityId: row.entity_id,
-    before: row.before_json === null ? null : JSON.parse(row.before_json),
-    after: row.after_json === null ? null : JSON.parse(row.after_json),
+    before: jsonValue(row.before_json),
+    after: jsonValue(row.after_json),
     reason: row.reason,
   };
 }

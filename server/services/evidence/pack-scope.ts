@@ -1,0 +1,60 @@
+import type { Knex } from 'knex';
+import type { PackFilter } from './pack-filter.js';
+
+// Which motors and runs a pack covers, as query fragments over the aliases
+// m (motors), l (lots), p (products) and r (test_runs), shared by every sheet and the CSV so
+// they can never disagree about what is in the pack.
+
+function runWindow(filter: PackFilter, q: Knex.QueryBuilder, alias = 'r'): Knex.QueryBuilder {
+  if (filter.from) q.where(`${alias}.started_at`, '>=', new Date(filter.from));
+  if (filter.to) q.where(`${alias}.started_at`, '<', new Date(filter.to));
+  return q;
+}
+
+/** motors m ⋈ lots l ⋈ products p, narrowed to the pack's motors. */
+export function packMotors(db: Knex, filter: PackFilter): Knex.QueryBuilder {
+  const q = db({ m: 'motors' }).join({ l: 'lots' }, 'l.id', 'm.lot_id').join({ p: 'products' }, 'p.id', 'm.product_id');
+  if (filter.serials) q.whereIn('m.serial', filter.serials);
+  if (filter.serialFrom && filter.serialTo) q.whereBetween('m.serial', [filter.serialFrom, filter.serialTo]);
+  if (filter.lots) q.whereIn('l.code', filter.lots);
+  if (filter.product) q.where('p.code', filter.product);
+  if (filter.from || filter.to) {
+    // A date range means "motors tested in that window", and only those runs are shown.
+    q.whereExists(function windowed(this: Knex.QueryBuilder) {
+      runWindow(filter, this.select(db.raw('1')).from({ w: 'test_runs' }).whereRaw('w.motor_id = m.id'), 'w');
+    });
+  }
+  return q;
+}
+
+/** The pack's runs: test_runs r joined to the pack's motors (and their lot and product). */
+export function packRuns(db: Knex, filter: PackFilter): Knex.QueryBuilder {
+  return runWindow(filter, packMotors(db, filter).join({ r: 'test_runs' }, 'r.motor_id', 'm.id'));
+}
+
+export type PackTotals = {
+  motors: number;
+  runs: number;
+  measurements: number;
+  motorStatus: Record<string, number>;
+  runVerdicts: Record<string, number>;
+  products: Array<{ id: number; code: string; name: string }>;
+};
+
+/** Counted once before writing: drives the progress bar and fills the Summary sheet. */
+export async function countPack(db: Knex, filter: PackFilter): Promise<PackTotals> {
+  const statusRows = (await packMotors(db, filter).groupBy('m.status').select('m.status').count({ n: '*' })) as Array<{ status: string; n: number }>;
+  const verdictRows = (await packRuns(db, filter).groupBy('r.verdict').select('r.verdict').count({ n: '*' })) as Array<{ verdict: string; n: number }>;
+  const measured = (await packRuns(db, filter).join({ ms: 'measurements' }, 'ms.run_id', 'r.id').count({ n: '*' }).first()) as { n: number } | undefined;
+  const products = (await packMotors(db, filter).distinct('p.id', 'p.code', 'p.name').orderBy('p.code')) as PackTotals['products'];
+  const motorStatus = Object.fromEntries(statusRows.map((row) => [row.status, Number(row.n)]));
+  const runVerdicts = Object.fromEntries(verdictRows.map((row) => [row.verdict, Number(row.n)]));
+  return {
+    motors: Object.values(motorStatus).reduce((a, b) => a + b, 0),
+    runs: Object.values(runVerdicts).reduce((a, b) => a + b, 0),
+    measurements: Number(measured?.n ?? 0),
+    motorStatus,
+    runVerdicts,
+    products: products.map((p) => ({ id: Number(p.id), code: p.code, name: p.name })),
+  };
+}

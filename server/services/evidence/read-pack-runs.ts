@@ -1,0 +1,77 @@
+import type { Knex } from 'knex';
+import type { PackFilter } from './pack-filter.js';
+import { packRuns } from './pack-scope.js';
+
+export type PackMeasurement = {
+  characteristicId: number; code: string; unit: string;
+  value: number; lsl: number | null; usl: number | null; verdict: string;
+};
+
+export type PackRun = {
+  id: number; uuid: string; serial: string; lot: string; product: string; attempt: number;
+  startedAt: Date; station: string; calibrationDue: Date; calibrationOk: boolean;
+  operatorBadge: string; programVersion: string; limitRevision: number | null; verdict: string;
+  measurements: PackMeasurement[];
+};
+
+type RunRow = {
+  id: number | string; run_uuid: string; serial: string; lot: string; product: string; attempt: number;
+  started_at: Date; station: string; calibration_due: Date; calibration_ok: number | boolean;
+  operator_badge: string; program_version: string; revision: number | null; verdict: string;
+};
+
+type MeasurementRow = {
+  run_id: number | string; characteristic_id: number; code: string; unit: string;
+  value: number; lsl: number | null; usl: number | null; verdict: string;
+};
+
+/**
+ * Visits the pack's runs in id order, one page at a time with their measurements, so memory
+ * stays flat however large the pack is. `visit` may throw to stop (cancellation).
+ */
+export async function eachRunPage(
+  db: Knex,
+  filter: PackFilter,
+  options: { productId?: number; pageSize?: number },
+  visit: (runs: PackRun[]) => Promise<void>,
+): Promise<void> {
+  const pageSize = options.pageSize ?? 500;
+  let afterId = 0;
+  for (;;) {
+    const q = packRuns(db, filter)
+      .join({ s: 'stations' }, 's.id', 'r.station_id')
+      .leftJoin({ ls: 'limit_sets' }, 'ls.id', 'r.limit_set_id')
+      .where('r.id', '>', afterId)
+      .orderBy('r.id')
+      .limit(pageSize)
+      .select(
+        'r.id', 'r.run_uuid', 'm.serial', { lot: 'l.code' }, { product: 'p.code' }, 'r.attempt', 'r.started_at',
+        { station: 's.code' }, 'r.calibration_due', 'r.calibration_ok', 'r.operator_badge', 'r.program_version',
+        'ls.revision', 'r.verdict',
+      );
+    if (options.productId !== undefined) q.where('m.product_id', options.productId);
+    const rows = (await q) as RunRow[];
+    if (rows.length === 0) return;
+    const ids = rows.map((row) => Number(row.id));
+    const measured = (await db({ ms: 'measurements' })
+      .join({ c: 'characteristics' }, 'c.id', 'ms.characteristic_id')
+      .whereIn('ms.run_id', ids)
+      .orderBy([{ column: 'ms.run_id' }, { column: 'c.sort_order' }, { column: 'c.id' }])
+      .select('ms.run_id', 'ms.characteristic_id', 'c.code', 'c.unit', 'ms.value', 'ms.lsl', 'ms.usl', 'ms.verdict')) as MeasurementRow[];
+    const byRun = new Map<number, PackMeasurement[]>();
+    for (const m of measured) {
+      const list = byRun.get(Number(m.run_id)) ?? [];
+      list.push({ characteristicId: Number(m.characteristic_id), code: m.code, unit: m.unit, value: Number(m.value), lsl: m.lsl, usl: m.usl, verdict: m.verdict });
+      byRun.set(Number(m.run_id), list);
+    }
+    await visit(rows.map((row) => ({
+      id: Number(row.id), uuid: row.run_uuid, serial: row.serial, lot: row.lot, product: row.product,
+      attempt: Number(row.attempt), startedAt: new Date(row.started_at), station: row.station,
+      calibrationDue: new Date(row.calibration_due), calibrationOk: Boolean(row.calibration_ok),
+      operatorBadge: row.operator_badge, programVersion: row.program_version,
+      limitRevision: row.revision === null ? null : Number(row.revision), verdict: row.verdict,
+      measurements: byRun.get(Number(row.id)) ?? [],
+    })));
+    afterId = ids[ids.length - 1];
+  }
+}
