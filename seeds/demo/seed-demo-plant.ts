@@ -1,0 +1,32 @@
+import type { Knex } from 'knex';
+import { forgetReferenceData } from '../../server/services/runs/reference-data.js';
+import { demoClock } from './clock.js';
+import { ingestPlannedRuns } from './ingest-runs.js';
+import { planMotors } from './plan-motors.js';
+import { resetPlantTables } from './reset.js';
+import { writeLots } from './write-lots.js';
+import { writeProducts } from './write-products.js';
+import { writeStations } from './write-stations.js';
+
+/** The demo's fixed PRNG seed: the same plant, serials and values on every run. */
+export const demoSeed = 20_261_201;
+
+export type DemoSeedReport = { motors: number; runs: number; elapsedMs: number };
+
+/**
+ * Builds the invented demo plant from scratch: setup data through Setup's audited operations,
+ * lots, then every test run through the real ingest service.
+ */
+export async function seedDemoPlant(db: Knex, options: { motors: number; now?: Date }): Promise<DemoSeedReport> {
+  const startedMs = Date.now();
+  const clock = demoClock(options.now ?? new Date());
+  await resetPlantTables(db);
+  // Ids restart after the reset, so nothing cached in this process may survive it.
+  forgetReferenceData();
+  await writeProducts(db, clock);
+  await writeStations(db, clock);
+  await writeLots(db, clock);
+  const motors = planMotors(demoSeed, clock, options.motors);
+  const runs = await ingestPlannedRuns(db, motors);
+  return { motors: motors.length, runs, elapsedMs: Date.now() - startedMs };
+}
