@@ -47,7 +47,13 @@ export function evidencePacksRouter({ db, config }: AppDeps) {
       'x-fluxtrail-sha256': file.sha256,
       'cache-control': 'no-store',
     });
-    await pipeline(createReadStream(file.path), res);
+    try {
+      await pipeline(createReadStream(file.path), res);
+    } catch (error) {
+      // Once bytes are on the wire the status cannot change; a client that hung up needs no answer.
+      if (!res.headersSent) throw error;
+      res.destroy();
+    }
   });
 
   return router;

@@ -6,7 +6,7 @@ import type { PackFilter } from './pack-filter.js';
 import { eachRunPage } from './read-pack-runs.js';
 import { csvLine } from './safe-text.js';
 
-export const csvHeader = ['serial', 'run_id', 'attempt', 'characteristic', 'value', 'unit', 'lsl', 'usl', 'verdict', 'station', 'started_at_utc'];
+export const csvHeader = ['serial', 'run_id', 'attempt', 'characteristic', 'value', 'unit', 'lsl', 'usl', 'verdict', 'station', 'operator_badge', 'started_at_utc'];
 
 async function put(out: WriteStream, text: string): Promise<void> {
   if (!out.write(text)) await once(out, 'drain');
@@ -28,7 +28,7 @@ export async function writePackCsv(
       let inPage = 0;
       for (const run of runs) {
         for (const m of run.measurements) {
-          chunk += csvLine([run.serial, run.uuid, run.attempt, m.code, m.value, m.unit, m.lsl, m.usl, m.verdict, run.station, run.startedAt.toISOString()]);
+          chunk += csvLine([run.serial, run.uuid, run.attempt, m.code, m.value, m.unit, m.lsl, m.usl, m.verdict, run.station, run.operatorBadge, run.startedAt.toISOString()]);
           inPage += 1;
         }
       }
