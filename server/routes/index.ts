@@ -5,6 +5,8 @@ import { meRouter } from './me.js';
 import { auditRouter } from './v1/audit.js';
 import { evidencePacksRouter } from './v1/evidence-packs.js';
 import { traceRouter } from './v1/trace.js';
+import { v1Router } from './v1/index.js';
+import { openapiRouter } from '../openapi/router.js';
 import { setupRouter } from './v1/setup/index.js';
 
 /** Every API router, one per resource. */
@@ -17,5 +19,7 @@ export function apiRouter({ db, config }: AppDeps) {
   router.use('/v1/evidence-packs', evidencePacksRouter({ db, config }));
   router.use('/v1/trace', traceRouter(db));
   router.use('/v1/setup', setupRouter(db));
+  router.use('/v1', v1Router(db));
+  router.use(openapiRouter(config.oidc.issuer));
   return router;
 }

@@ -1,0 +1,19 @@
+import { Router } from 'express';
+import type { Knex } from 'knex';
+import { productsRouter } from './products.js';
+import { stationsMeRouter } from './stations-me.js';
+import { testRunsRouter } from './test-runs.js';
+import { motorsRouter } from './motors.js';
+import { holdsRouter, lotsRouter } from './lots.js';
+
+/** The versioned plant-record API, mounted at /api/v1. */
+export function v1Router(db: Knex) {
+  const router = Router();
+  router.use('/products', productsRouter(db));
+  router.use('/stations/me', stationsMeRouter(db));
+  router.use('/test-runs', testRunsRouter(db));
+  router.use('/motors', motorsRouter(db));
+  router.use('/lots', lotsRouter(db));
+  router.use('/holds', holdsRouter(db));
+  return router;
+}

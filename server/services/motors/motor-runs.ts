@@ -1,0 +1,51 @@
+import type { Knex } from 'knex';
+
+export type RunResultView = {
+  characteristic: string; name: string; unit: string; testStep: string;
+  value: number; lsl: number | null; nominal: number | null; usl: number | null; verdict: 'pass' | 'fail';
+};
+export type RunView = {
+  runId: string; attempt: number; verdict: 'pass' | 'fail'; startedAt: string; finishedAt: string;
+  station: { code: string; line: string }; operatorBadge: string; programVersion: string;
+  limitRevision: number | null; calibrationOk: boolean; calibrationDue: string;
+  results: RunResultView[]; waveforms: Array<{ kind: string; summary: unknown }>;
+};
+
+/**
+ * Every run of one motor, latest first, each with its results in test-plan order and the nominal
+ * of the revision it was judged by. Three indexed queries however many runs the motor has.
+ */
+export async function runsOfMotor(db: Knex, motorId: number): Promise<RunView[]> {
+  const [runs, results, waveforms] = await Promise.all([
+    db('test_runs').join('stations', 'stations.id', 'test_runs.station_id')
+      .leftJoin('limit_sets', 'limit_sets.id', 'test_runs.limit_set_id')
+      .where('test_runs.motor_id', motorId).orderBy('test_runs.attempt', 'desc')
+      .select('test_runs.*', 'stations.code as station_code', 'stations.line as station_line', 'limit_sets.revision as limit_revision'),
+    db('test_runs').join('measurements', 'measurements.run_id', 'test_runs.id')
+      .join('characteristics', 'characteristics.id', 'measurements.characteristic_id')
+      .leftJoin('limits', (on) => on.on('limits.limit_set_id', 'test_runs.limit_set_id').andOn('limits.characteristic_id', 'measurements.characteristic_id'))
+      .where('test_runs.motor_id', motorId).orderBy(['characteristics.sort_order', 'characteristics.id'])
+      .select('measurements.run_id', 'characteristics.code', 'characteristics.name', 'characteristics.unit', 'characteristics.test_step',
+        'measurements.value', 'measurements.lsl', 'limits.nominal', 'measurements.usl', 'measurements.verdict'),
+    db('test_runs').join('waveforms', 'waveforms.run_id', 'test_runs.id')
+      .where('test_runs.motor_id', motorId).orderBy('waveforms.id').select('waveforms.run_id', 'waveforms.kind', 'waveforms.summary_json'),
+  ]);
+  return runs.map((run) => ({
+    runId: run.run_uuid, attempt: run.attempt, verdict: run.verdict,
+    startedAt: run.started_at.toISOString(), finishedAt: run.finished_at.toISOString(),
+    station: { code: run.station_code, line: run.station_line },
+    operatorBadge: run.operator_badge, programVersion: run.program_version,
+    limitRevision: run.limit_revision ?? null, calibrationOk: Boolean(run.calibration_ok),
+    calibrationDue: run.calibration_due.toISOString().slice(0, 10),
+    results: results.filter((r) => r.run_id === run.id).map((r) => ({
+      characteristic: r.code, name: r.name, unit: r.unit, testStep: r.test_step,
+      value: r.value, lsl: r.lsl, nominal: r.nominal, usl: r.usl, verdict: r.verdict,
+    })),
+    waveforms: waveforms.filter((w) => w.run_id === run.id).map((w) => ({ kind: w.kind, summary: parseJson(w.summary_json) })),
+  }));
+}
+
+/** MariaDB's JSON is LONGTEXT on the wire. */
+export function parseJson(value: unknown): unknown {
+  return typeof value === 'string' ? JSON.parse(value) : value;
+}
