@@ -63,8 +63,12 @@ export default function ScanRoute() {
     <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_20rem]">
       <div className="min-w-0 space-y-5">
         <h1 className="sr-only">Scan</h1>
-        <SerialScanField onScan={scan} answerKey={answerKey} busy={state.kind === 'looking'} />
-        <CameraScanButton onScan={scan} />
+        <div className="flex flex-wrap items-end gap-3">
+          <div className="min-w-72 flex-1">
+            <SerialScanField onScan={scan} answerKey={answerKey} busy={state.kind === 'looking'} />
+          </div>
+          <CameraScanButton onScan={scan} />
+        </div>
         <Answer state={state} onDialogClosed={() => setRefocusCount((count) => count + 1)} />
       </div>
       <aside>

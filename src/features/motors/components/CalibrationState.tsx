@@ -15,10 +15,12 @@ export function CalibrationState({ ok, due, size = 'sm' }: CalibrationStateProps
   const text = size === 'lg' ? 'text-lg' : 'text-sm';
   const shape = size === 'lg' ? 'h-5 w-5' : 'h-3.5 w-3.5';
   return (
-    <span className={`inline-flex items-center gap-1.5 font-medium ${text} ${ok ? 'text-pass-ink' : 'text-fail-ink'}`}>
-      <StatusShape kind={ok ? 'pass' : 'fail'} className={`${shape} ${ok ? 'text-pass' : 'text-fail'}`} />
-      <span>{ok ? 'Calibration OK' : 'Calibration expired'}</span>
-      <span className="font-normal text-graphite-500">(due {showDue(due)})</span>
+    <span className={`inline-flex flex-wrap items-center gap-x-1.5 font-medium ${text} ${ok ? 'text-pass-ink' : 'text-fail-ink'}`}>
+      <span className="inline-flex items-center gap-1.5 whitespace-nowrap">
+        <StatusShape kind={ok ? 'pass' : 'fail'} className={`${shape} ${ok ? 'text-pass' : 'text-fail'}`} />
+        {ok ? 'Calibration OK' : 'Calibration expired'}
+      </span>
+      <span className="figures whitespace-nowrap font-normal text-graphite-500">(due {showDue(due)})</span>
     </span>
   );
 }

@@ -3,12 +3,16 @@ import type { Measurement } from '../api/motor-schemas';
 
 type Limits = Pick<Measurement, 'lsl' | 'usl' | 'unit'>;
 
+/** A ratio's unit "1" (SI for dimensionless) is left off: "1.46", not "1.46 1". */
+export const displayUnit = (unit: string | null | undefined): string | undefined =>
+  unit && unit !== '1' ? unit : undefined;
+
 const present = (limit: number | null | undefined): limit is number => limit !== null && limit !== undefined;
 
 /** "1.20 … 1.45 Ω" for two-sided limits, "≥ 100 MΩ" or "≤ 5 mA" for one-sided ones. */
 export function formatLimits({ lsl, usl, unit }: Limits): string {
-  const withUnit = (value: number) => formatNumber(value, { unit: unit ?? undefined });
-  if (present(lsl) && present(usl)) return `${formatNumber(lsl)} … ${withUnit(usl)}`;
+  const withUnit = (value: number) => formatNumber(value, { unit: displayUnit(unit) });
+  if (present(lsl) && present(usl)) return lsl === usl ? `= ${withUnit(lsl)}` : `${formatNumber(lsl)} … ${withUnit(usl)}`;
   if (present(lsl)) return `≥ ${withUnit(lsl)}`;
   if (present(usl)) return `≤ ${withUnit(usl)}`;
   return 'no limit';

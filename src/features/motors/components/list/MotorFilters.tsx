@@ -43,9 +43,9 @@ export function MotorFilters({ filters, products, onChange, onClear }: MotorFilt
       role="search"
       aria-label="Filter motors"
       onSubmit={(event) => event.preventDefault()}
-      className="mb-4 grid grid-cols-2 items-end gap-3 rounded-lg border border-paper-300 bg-paper-50 p-4 md:grid-cols-4 xl:grid-cols-8"
+      className="mb-4 grid grid-cols-2 items-end gap-3 rounded-lg border border-paper-300 bg-paper-50 p-4 md:grid-cols-4 xl:grid-cols-[repeat(7,minmax(0,1fr))_auto]"
     >
-      {text('serialPrefix', 'Serial starts with', 'e.g. PM7-2612')}
+      {text('serialPrefix', 'Serial prefix', 'Start of serial')}
       <Field label="Product">
         <select value={filters.product} onChange={(event) => onChange({ product: event.target.value })} className={fieldClass}>
           <option value="">All products</option>

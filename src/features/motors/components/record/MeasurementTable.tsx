@@ -1,6 +1,7 @@
 import { VerdictBadge } from '../../../../components/VerdictBadge';
 import { formatNumber } from '../../../../lib/format';
 import type { Measurement } from '../../api/motor-schemas';
+import { displayUnit } from '../limits';
 
 const numberCell = 'figures px-3 py-1.5 text-right';
 
@@ -31,7 +32,7 @@ export function MeasurementTable({ results }: { results: Measurement[] }) {
               </td>
               <td className="px-3 py-1.5 text-graphite-600">{result.testStep ?? '—'}</td>
               <td className={`${numberCell} font-semibold text-graphite-950`}>{formatNumber(result.value, { maxDigits: 4 })}</td>
-              <td className="px-3 py-1.5 text-graphite-600">{result.unit ?? ''}</td>
+              <td className="px-3 py-1.5 text-graphite-600">{displayUnit(result.unit) ?? ''}</td>
               <td className={numberCell}>{formatNumber(result.lsl, { maxDigits: 4 })}</td>
               <td className={numberCell}>{formatNumber(result.nominal, { maxDigits: 4 })}</td>
               <td className={numberCell}>{formatNumber(result.usl, { maxDigits: 4 })}</td>

@@ -43,7 +43,8 @@ export function CameraScanButton({ onScan }: { onScan: (serial: string) => void 
 
   if (!cameraAvailable()) return null;
   return (
-    <div className="space-y-3">
+    // `contents`: the button sits in the scan row and the camera view wraps onto its own line below it.
+    <div className="contents">
       {active ? (
         <Button variant="secondary" size="glove" onClick={stop}>
           Stop camera
@@ -58,9 +59,9 @@ export function CameraScanButton({ onScan }: { onScan: (serial: string) => void 
         muted
         playsInline
         aria-label="Camera view"
-        className={active ? 'w-full max-w-md rounded-lg border-2 border-graphite-700 bg-graphite-950' : 'hidden'}
+        className={active ? 'order-last w-full max-w-md basis-full rounded-lg border-2 border-graphite-700 bg-graphite-950' : 'hidden'}
       />
-      {problem ? <p className="text-lg text-fail-ink">{problem}</p> : null}
+      {problem ? <p className="order-last basis-full text-lg text-fail-ink">{problem}</p> : null}
     </div>
   );
 }

@@ -2,7 +2,7 @@ import { VerdictBadge } from '../../../../components/VerdictBadge';
 import { formatNumber } from '../../../../lib/format';
 import type { Measurement } from '../../api/motor-schemas';
 import { LimitBar } from '../LimitBar';
-import { formatLimits } from '../limits';
+import { displayUnit, formatLimits } from '../limits';
 
 /** Failing steps first; otherwise the station's own order. */
 const failingFirst = (results: Measurement[]) =>
@@ -20,16 +20,16 @@ export function ScanStepList({ results }: { results: Measurement[] }) {
         <li
           key={result.characteristic}
           data-verdict={result.verdict}
-          className={`grid grid-cols-[1fr_auto] items-center gap-x-4 gap-y-2 px-4 py-3 sm:grid-cols-[minmax(0,14rem)_1fr_auto] ${result.verdict === 'fail' ? 'bg-fail-soft/60' : ''}`}
+          className={`grid grid-cols-[1fr_auto] items-center gap-x-4 gap-y-2 px-4 py-3 sm:grid-cols-[minmax(0,16rem)_1fr_auto] ${result.verdict === 'fail' ? 'bg-fail-soft/60' : ''}`}
         >
           <div className="min-w-0">
-            <p className="truncate text-lg font-semibold text-graphite-950">{result.name}</p>
-            <p className="truncate text-sm text-graphite-500">{result.testStep ?? result.characteristic}</p>
+            <p className="text-lg leading-snug font-semibold text-graphite-950">{result.name}</p>
+            <p className="text-sm text-graphite-500">{result.testStep ?? result.characteristic}</p>
           </div>
           <div className="col-span-2 row-start-2 sm:col-span-1 sm:row-start-auto">
             <div className="flex items-baseline justify-between gap-3">
               <span className="figures text-2xl font-semibold text-graphite-950">
-                {formatNumber(result.value, { unit: result.unit ?? undefined })}
+                {formatNumber(result.value, { unit: displayUnit(result.unit) })}
               </span>
               <span className="figures text-base text-graphite-600">{formatLimits(result)}</span>
             </div>
