@@ -1,7 +1,8 @@
 import { DEG_PER_RAD, wrapDegrees360 } from './angles.js';
-import { measureFundamentalHz, wholeCyclesIn } from './fundamental-frequency.js';
+import { loudest, measureFundamentalHz, wholeCyclesIn } from './fundamental-frequency.js';
+import { harmonicPhasors } from './goertzel.js';
+import { hannSpan, spanLevels, weightedSamples } from './hann-span.js';
 import { requirePositive, requirePositiveInteger, requireSameLength, toFiniteSamples, type Samples } from './validate.js';
-import { hannSpan, harmonicPhasors, spanLevels } from './whole-cycle-dft.js';
 
 /** Highest harmonic evaluated: the output is keyed 2…25 (IEC 61000-2-2 would go to the 40th). */
 export const HIGHEST_HARMONIC = 25;
@@ -40,11 +41,11 @@ const LINES = ['uv', 'vw', 'wu'] as const;
 /**
  * Back-EMF analysis of the three line-to-line voltages of an open-circuit spin test.
  *
- * - electricalHz: measured from the signals (fundamental-frequency.ts), not taken from p·n/60;
+ * - electricalHz: measured on the loudest line (fundamental-frequency.ts), not taken from p·n/60;
  *   polePairsFromFrequency = round(60·f/n) (f = p·n/60, common practice).
  * - Harmonics: Hann-weighted single-frequency DFT at exact multiples of the measured frequency
  *   over the largest whole number of cycles in the record (IEC 61000-4-7 whole-cycle principle;
- *   whole-cycle-dft.ts says why the weights make a span that ends between samples exact).
+ *   hann-span.ts says why the weights make a span that ends between samples exact).
  * - rmsV: true RMS about DC over those whole cycles; peakV: largest |v − DC| in them.
  * - keVPerKrpm: mean of the three fundamental line-to-line RMS values per 1000 rpm.
  * - thdPercent: IEEE Std 519-2014, 100·√(Σ V_h²)/V₁ with h = 2…25, the orders reported in
@@ -64,7 +65,7 @@ export function analyzeBackEmf(input: BackEmfInput): BackEmfAnalysis {
   const signals = LINES.map((line) => toFiniteSamples(`lineToLineV.${line}`, input.lineToLineV[line]));
   requireSameLength(LINES.map((line, i) => [`lineToLineV.${line}`, signals[i]] as const));
 
-  const electricalHz = measureFundamentalHz(signals, sampleRateHz, 'lineToLineV');
+  const electricalHz = measureFundamentalHz(loudest(signals), sampleRateHz, 'lineToLineV');
   if (HIGHEST_HARMONIC * electricalHz >= sampleRateHz / 2) {
     throw new Error(
       `sampleRateHz must exceed ${2 * HIGHEST_HARMONIC} × the ${electricalHz.toFixed(2)} Hz fundamental so its ${HIGHEST_HARMONIC}th harmonic lies below Nyquist, got ${sampleRateHz}`,
@@ -76,7 +77,9 @@ export function analyzeBackEmf(input: BackEmfInput): BackEmfAnalysis {
   }
   const samplesPerCycle = sampleRateHz / electricalHz;
   const span = hannSpan(0, cycles * samplesPerCycle, signals[0].length);
-  const phasors = harmonicPhasors(signals, span, (2 * Math.PI) / samplesPerCycle, HIGHEST_HARMONIC);
+  const phasors = signals.map((x) =>
+    harmonicPhasors(weightedSamples(x, span), span, (2 * Math.PI) / samplesPerCycle, HIGHEST_HARMONIC),
+  );
   const levels = signals.map((x) => spanLevels(x, span));
   const amplitudes = phasors.map((p) => p.re.map((re, order) => Math.hypot(re, p.im[order])));
   const fundamentalRmsV = amplitudes.map((a) => a[1] / Math.SQRT2);

@@ -1,7 +1,8 @@
 import { DEG_PER_RAD, wrapDegrees180 } from './angles.js';
 import { measureFundamentalHz, wholeCyclesIn } from './fundamental-frequency.js';
 import { requirePositive, requirePositiveInteger, requireSameLength, toFiniteSamples, type Samples } from './validate.js';
-import { hannSpan, harmonicPhasors } from './whole-cycle-dft.js';
+import { harmonicPhasors } from './goertzel.js';
+import { hannSpan, weightedSamples } from './hann-span.js';
 
 export interface ResolverOffsetInput {
   sampleRateHz: number;
@@ -40,6 +41,7 @@ const SPEED_RATIO_TOLERANCE = 0.05;
  * giving θ(t) = 2π·f·t + φ − 30° for uv ∝ sin(2π·f·t + φ); the offset is the circular mean of
  * resolver − θ over every sample. Because the pole-pair ratio is a whole number, multiplying a
  * wrapped resolver reading by it is exact modulo 360°, so the difference needs no unwrapping.
+ * The record needs at least 8 samples per electrical cycle (spectrum-peak.ts).
  */
 export function resolverOffset(input: ResolverOffsetInput): ResolverOffset {
   const sampleRateHz = requirePositive('sampleRateHz', input.sampleRateHz);
@@ -55,7 +57,7 @@ export function resolverOffset(input: ResolverOffsetInput): ResolverOffset {
   const resolverDeg = toFiniteSamples('resolverAngleDeg', input.resolverAngleDeg);
   requireSameLength([['backEmfUvV', uv], ['resolverAngleDeg', resolverDeg]]);
 
-  const electricalHz = measureFundamentalHz([uv], sampleRateHz, 'backEmfUvV');
+  const electricalHz = measureFundamentalHz(uv, sampleRateHz, 'backEmfUvV');
   const cycles = wholeCyclesIn(uv.length, sampleRateHz, electricalHz);
   if (cycles < 2) {
     throw new Error(`backEmfUvV must hold at least two electrical cycles, got ${cycles}`);
@@ -63,7 +65,8 @@ export function resolverOffset(input: ResolverOffsetInput): ResolverOffset {
   const omega = (2 * Math.PI * electricalHz) / sampleRateHz;
   requireMatchingSpeed(resolverDeg, ratio, omega);
 
-  const [fundamental] = harmonicPhasors([uv], hannSpan(0, cycles * (2 * Math.PI) / omega, uv.length), omega, 1);
+  const span = hannSpan(0, (cycles * 2 * Math.PI) / omega, uv.length);
+  const fundamental = harmonicPhasors(weightedSamples(uv, span), span, omega, 1);
   // uv = A·cos(ω·n + φc) = A·sin(ω·n + φc + 90°) and uv ∝ sin(θ + 30°), so θ(n) = ω·n + φc + 60°.
   const thetaAtZeroDeg = Math.atan2(fundamental.im[1], fundamental.re[1]) * DEG_PER_RAD + 60;
   const degPerSample = omega * DEG_PER_RAD;

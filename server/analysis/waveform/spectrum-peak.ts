@@ -6,9 +6,11 @@ import FFT from 'fft.js';
  * fundamental-frequency.ts.
  */
 
-// Long records are block-averaged down to at most this many points before the FFT: the coarse
-// peak needs the record's duration (its frequency resolution), not every sample.
-const MAX_FFT_POINTS = 32768;
+// Long records are block-averaged towards this many points before the FFT: the coarse peak
+// needs the record's duration (its frequency resolution), not every sample. Blocks of at most
+// four samples keep every fundamental below sampleRateHz/8 in band.
+const TARGET_FFT_POINTS = 16384;
+const MAX_BLOCK_SAMPLES = 4;
 
 // Building an FFT's twiddle and bit-reversal tables costs more than the transform itself, so
 // each size is built once. The tables are read-only, which keeps the function pure.
@@ -23,12 +25,12 @@ const MIN_CYCLES_PER_RECORD = 1;
  * fft.js with zero padding to a power of two, peak bin refined by fitting a parabola to the
  * logarithm of the three bins around it (Gaussian interpolation, common practice; its bias for a
  * Hann window is a few hundredths of a bin).
- * A long record is first averaged in blocks of D samples; that keeps every fundamental below
- * sampleRateHz/(2D) in band, and the callers require the fundamental far lower (its 25th
- * harmonic below Nyquist).
+ * A long record is first averaged in blocks of D ≤ 4 samples, which keeps every fundamental
+ * below sampleRateHz/(2D) in band: the fundamental needs at least 8 samples a cycle (the
+ * back-EMF analysis requires 50, for its 25th harmonic).
  */
 export function coarseSpectrumPeakHz(x: Float64Array, sampleRateHz: number, name: string): number {
-  const blockSize = Math.ceil(x.length / MAX_FFT_POINTS);
+  const blockSize = Math.min(MAX_BLOCK_SAMPLES, Math.ceil(x.length / TARGET_FFT_POINTS));
   const points = Math.floor(x.length / blockSize);
   const decimated = new Float64Array(points);
   let mean = 0;
@@ -49,7 +51,8 @@ export function coarseSpectrumPeakHz(x: Float64Array, sampleRateHz: number, name
     fft = new FFT(fftSize);
     fftBySize.set(fftSize, fft);
   }
-  const spectrum: number[] = fft.createComplexArray();
+  // fft.js only indexes its output, so a typed array serves and saves building a plain one.
+  const spectrum = new Float64Array(2 * fftSize);
   fft.realTransform(spectrum, windowed);
 
   const power = new Float64Array(fftSize / 2);

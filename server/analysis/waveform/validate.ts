@@ -24,17 +24,22 @@ export function requirePositiveInteger(name: string, value: number): number {
  * used as it is (the analyses only read it); a plain array is copied.
  */
 export function toFiniteSamples(name: string, values: Samples): Float64Array {
-  if (!(values instanceof Float64Array) && !Array.isArray(values)) {
-    throw new Error(`${name} must be an array of numbers`);
-  }
-  for (let i = 0; i < values.length; i++) {
-    const value = values[i];
-    // Checked on the original because a typed-array copy would turn null into 0.
-    if (typeof value !== 'number' || !Number.isFinite(value)) {
-      throw new Error(`${name}[${i}] must be a finite number, got ${String(value)}`);
+  if (values instanceof Float64Array) {
+    for (let i = 0; i < values.length; i++) {
+      if (!Number.isFinite(values[i])) throw notFinite(name, i, values[i]);
     }
+    return values;
   }
-  return values instanceof Float64Array ? values : new Float64Array(values);
+  if (!Array.isArray(values)) throw new Error(`${name} must be an array of numbers`);
+  for (let i = 0; i < values.length; i++) {
+    // Checked on the original because a typed-array copy would turn null into 0.
+    if (typeof values[i] !== 'number' || !Number.isFinite(values[i])) throw notFinite(name, i, values[i]);
+  }
+  return new Float64Array(values);
+}
+
+function notFinite(name: string, index: number, value: unknown): Error {
+  return new Error(`${name}[${index}] must be a finite number, got ${String(value)}`);
 }
 
 /** Requires every named record to hold the same number of samples as the first. */
