@@ -18,12 +18,16 @@ export function LotCountsSummary({ counts, large = false }: { counts: LotCounts;
       <li className="text-graphite-700">
         <span className="figures font-semibold text-graphite-950">{formatCount(counts.motors)}</span> motors
       </li>
-      {parts.map((part) => (
-        <li key={part.key} className="inline-flex items-center gap-1.5 text-graphite-700">
-          <StatusShape kind={part.shape} className={`${shape} ${part.tone}`} />
-          <span className="figures font-semibold text-graphite-950">{formatCount(counts[part.key])}</span> {part.word}
-        </li>
-      ))}
+      {parts.map((part) => {
+        // Zero counts step back so the eye lands on the lots that have failures or holds.
+        const none = counts[part.key] === 0;
+        return (
+          <li key={part.key} className={`inline-flex items-center gap-1.5 ${none ? 'text-graphite-400' : 'text-graphite-700'}`}>
+            <StatusShape kind={part.shape} className={`${shape} ${none ? 'text-graphite-300' : part.tone}`} />
+            <span className={`figures font-semibold ${none ? '' : 'text-graphite-950'}`}>{formatCount(counts[part.key])}</span> {part.word}
+          </li>
+        );
+      })}
     </ul>
   );
 }
