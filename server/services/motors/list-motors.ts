@@ -25,7 +25,7 @@ export async function listMotors(db: Knex, filter: MotorListFilter): Promise<{ i
   if (filter.status) query.where('motors.status', filter.status);
   if (filter.from) query.where('motors.last_tested_at', '>=', filter.from);
   if (filter.to) query.where('motors.last_tested_at', '<', filter.to);
-  if (filter.serialPrefix) query.whereLike('motors.serial', `${filter.serialPrefix.replace(/[\\%_]/g, (c) => `\\${c}`)}%`);
+  if (filter.serialPrefix) query.where('motors.serial', 'like', `${filter.serialPrefix.replace(/[\\%_]/g, (c) => `\\${c}`)}%`);
   const cursor = filter.cursor ? decodeMotorCursor(filter.cursor, filter.sort) : null;
   if (filter.sort === 'serial') {
     if (cursor?.sort === 'serial') query.where('motors.serial', filter.order === 'asc' ? '>' : '<', cursor.serial);
