@@ -45,7 +45,7 @@ export function MotorFilters({ filters, products, onChange, onClear }: MotorFilt
       onSubmit={(event) => event.preventDefault()}
       className="mb-4 grid grid-cols-2 items-end gap-3 rounded-lg border border-paper-300 bg-paper-50 p-4 md:grid-cols-4 xl:grid-cols-[repeat(7,minmax(0,1fr))_auto]"
     >
-      {text('serialPrefix', 'Serial prefix', 'Start of serial')}
+      {text('serialPrefix', 'Serial prefix', 'PM150-…')}
       <Field label="Product">
         <select value={filters.product} onChange={(event) => onChange({ product: event.target.value })} className={fieldClass}>
           <option value="">All products</option>
@@ -56,7 +56,7 @@ export function MotorFilters({ filters, products, onChange, onClear }: MotorFilt
           ))}
         </select>
       </Field>
-      {text('lot', 'Lot', 'Lot code')}
+      {text('lot', 'Lot', 'Code')}
       <Field label="Status">
         <select value={filters.status} onChange={(event) => onChange({ status: event.target.value })} className={fieldClass}>
           <option value="">Any status</option>
@@ -67,7 +67,7 @@ export function MotorFilters({ filters, products, onChange, onClear }: MotorFilt
           ))}
         </select>
       </Field>
-      {text('station', 'Station', 'Station code')}
+      {text('station', 'Station', 'Code')}
       <Field label="Tested from">
         <input type="date" value={filters.from} onChange={(event) => onChange({ from: event.target.value })} className={fieldClass} />
       </Field>
