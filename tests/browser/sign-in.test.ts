@@ -1,5 +1,6 @@
 import { afterEach, beforeEach, describe, expect, inject, it } from 'vitest';
 import { openBrowser, screenshot, signInAs, type BrowserSession } from '../support/browser.js';
+import { testPorts } from '../support/ports.js';
 
 describe('signing in through the IdP fake in Chromium', () => {
   const appUrl = inject('appUrl');
@@ -26,7 +27,7 @@ describe('signing in through the IdP fake in Chromium', () => {
     const { page } = browser;
     await signInAs(page, appUrl, 'operator', 'wrong-password');
     await expect.poll(() => page.getByText('Wrong login or password.').isVisible()).toBe(true);
-    expect(page.url()).toContain('127.0.0.1:3121');
+    expect(new URL(page.url()).port).toBe(String(testPorts.browserIdp));
   });
 
   it('when quality signs in, then the quality screens show and operator-only ones do not', async () => {
