@@ -1,0 +1,53 @@
+import type { Knex } from 'knex';
+import { z } from 'zod';
+import { invalid } from '../../errors.js';
+import { recordAudit, type Actor } from '../audit/record-audit.js';
+import { isKnownTimeZone } from './plant-time.js';
+import { readShiftCalendar, type ShiftCalendar } from './shift-calendar.js';
+
+const clock = z.string().regex(/^([01]\d|2[0-3]):(00|15|30|45)$/, 'must be HH:MM on a quarter hour, e.g. 06:00');
+
+export const shiftCalendarBodySchema = z.strictObject({
+  timeZone: z.string().trim().min(1).max(64).refine(isKnownTimeZone, 'must be an IANA time zone such as Europe/Berlin or UTC'),
+  firstPassTarget: z.number().gt(0, 'must be above 0').max(1, 'must be at most 1 (100 %)'),
+  shifts: z.array(z.strictObject({
+    code: z.string().trim().regex(/^[a-z0-9-]{1,16}$/, 'must be 1–16 lower-case letters, digits or dashes'),
+    name: z.string().trim().min(1).max(64),
+    startsAt: clock,
+  })).min(1, 'give at least one shift').max(6, 'give at most six shifts'),
+  reason: z.string().trim().min(3, 'say why, in at least 3 characters').max(1000),
+}).meta({ id: 'ShiftCalendarBody' });
+export type ShiftCalendarBody = z.infer<typeof shiftCalendarBodySchema>;
+
+const minutesOf = (clockTime: string) => Number(clockTime.slice(0, 2)) * 60 + Number(clockTime.slice(3, 5));
+export const clockOf = (minutes: number) => `${String(Math.floor(minutes / 60)).padStart(2, '0')}:${String(minutes % 60).padStart(2, '0')}`;
+
+/** The calendar as the API shows it: shift starts as HH:MM. */
+export function presentCalendar(calendar: ShiftCalendar) {
+  return { ...calendar, shifts: calendar.shifts.map((s) => ({ code: s.code, name: s.name, startsAt: clockOf(s.startsMinute) })) };
+}
+
+/**
+ * Replaces the plant's shifts, time zone and first-pass target in one audited step. The yield
+ * rollups store UTC buckets only, so past motors fall into the new shifts without a rewrite.
+ */
+export async function changeShiftCalendar(db: Knex, body: ShiftCalendarBody, actor: Actor, now = new Date()) {
+  const codes = body.shifts.map((s) => s.code);
+  const starts = body.shifts.map((s) => minutesOf(s.startsAt));
+  const fields = [
+    ...codes.flatMap((c, i) => (codes.indexOf(c) !== i ? [{ field: `shifts[${i}].code`, message: `code ${c} is given twice` }] : [])),
+    ...starts.flatMap((m, i) => (starts.indexOf(m) !== i ? [{ field: `shifts[${i}].startsAt`, message: 'two shifts cannot start at the same time' }] : [])),
+  ];
+  if (fields.length > 0) throw invalid(fields);
+  return db.transaction(async (trx) => {
+    const before = presentCalendar(await readShiftCalendar(trx));
+    await trx('plant_shifts').delete();
+    await trx('plant_shifts').insert(body.shifts.map((s) => ({ code: s.code, name: s.name, starts_minute: minutesOf(s.startsAt) })));
+    await trx('yield_settings')
+      .insert({ id: 1, time_zone: body.timeZone, first_pass_target: body.firstPassTarget, updated_by: actor.name, updated_at: now })
+      .onConflict('id').merge();
+    const after = presentCalendar(await readShiftCalendar(trx));
+    await recordAudit(trx, { actor, action: 'shift_calendar.changed', entityType: 'shift_calendar', entityId: 'plant', before, after, reason: body.reason, at: now });
+    return after;
+  });
+}
