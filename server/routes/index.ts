@@ -8,6 +8,7 @@ import { traceRouter } from './v1/trace.js';
 import { v1Router } from './v1/index.js';
 import { openapiRouter } from '../openapi/router.js';
 import { setupRouter } from './v1/setup/index.js';
+import { yieldRouter } from './v1/yield.js';
 
 /** Every API router, one per resource. */
 export function apiRouter({ db, config }: AppDeps) {
@@ -19,6 +20,7 @@ export function apiRouter({ db, config }: AppDeps) {
   router.use('/v1/evidence-packs', evidencePacksRouter({ db, config }));
   router.use('/v1/trace', traceRouter(db));
   router.use('/v1/setup', setupRouter(db));
+  router.use('/v1/yield', yieldRouter(db));
   router.use('/v1', v1Router(db));
   router.use(openapiRouter(config.oidc.issuer));
   return router;
