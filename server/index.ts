@@ -4,6 +4,7 @@ import { loadConfig, ConfigError, type Config } from './config.js';
 import { createDb } from './db/knex.js';
 import { buildApp } from './app.js';
 import { startJobs } from './jobs/start-jobs.js';
+import { startMailOutbox } from './jobs/mail-outbox.js';
 import type { Knex } from 'knex';
 
 export type RunningServer = { server: Server; db: Knex; config: Config; url: string; stop(): Promise<void> };
@@ -17,10 +18,12 @@ export async function startServer(config: Config = loadConfig()): Promise<Runnin
   });
   const { port } = server.address() as AddressInfo;
   const jobs = config.jobsEnabled ? startJobs({ db, config }) : undefined;
+  const mailOutbox = config.jobsEnabled ? startMailOutbox({ db, config }) : undefined;
   return {
     server, db, config, url: `http://${config.host}:${port}`,
     async stop() {
       await jobs?.stop();
+      await mailOutbox?.stop();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       server.closeAllConnections();
       await db.destroy();

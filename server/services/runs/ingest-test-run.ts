@@ -10,6 +10,7 @@ import { checkSerialAndLot, checkTimes } from './check-run-document.js';
 import { checkResults, judgeRun, type LabelledResult } from './judge-run.js';
 import { deriveCharacteristics } from './derive-characteristics.js';
 import { answerForRetry, bodySha256, type IngestOutcome } from './stored-run.js';
+import { evaluateSpcAfterIngest } from '../spc/evaluate-after-ingest.js';
 import { updateYieldRollups } from '../yield/update-yield-rollups.js';
 
 export type IngestOptions = {
@@ -102,6 +103,7 @@ async function storeRun(trx: Knex.Transaction, run: RunToStore, now: Date): Prom
     attempts: attempt, latest_run_id: runId, last_station_id: station.id, last_tested_at: new Date(document.finishedAt),
     status: statusAfterRun(trx, judged.verdict),
   });
+  await evaluateSpcAfterIngest(trx, { runId: Number(runId), motorId: motor.id, lotId: run.lotId, productId: run.productId, startedAt: document.startedAt, measurements: judged.results }, now);
   await updateYieldRollups(trx, {
     motorId: motor.id, runId: Number(runId), attempt, startedAt: new Date(document.startedAt), verdict: judged.verdict,
     productId: run.productId, lotId: run.lotId, station, failingCharacteristicIds: judged.results.filter((r) => r.verdict === 'fail').map((r) => r.characteristicId),
