@@ -12,7 +12,7 @@ const transmitMs = 2_000;
  * with a few motors in flight at once. A motor's runs go one after the other and stop at a pass,
  * so attempts, verdicts, limit revisions, motor status and calibration holds are the server's own.
  */
-export async function ingestPlannedRuns(db: Knex, motors: readonly PlannedMotor[], concurrency = 4): Promise<number> {
+export async function ingestPlannedRuns(db: Knex, motors: readonly PlannedMotor[], concurrency = 8): Promise<number> {
   const queue = [...motors].sort((a, b) => a.attempts[0].startedAt.getTime() - b.attempts[0].startedAt.getTime());
   let next = 0;
   let runs = 0;
