@@ -77,10 +77,10 @@ export function analyzeBackEmf(input: BackEmfInput): BackEmfAnalysis {
   }
   const samplesPerCycle = sampleRateHz / electricalHz;
   const span = hannSpan(0, cycles * samplesPerCycle, signals[0].length);
-  const phasors = signals.map((x) =>
-    harmonicPhasors(weightedSamples(x, span), span, (2 * Math.PI) / samplesPerCycle, HIGHEST_HARMONIC),
-  );
   const levels = signals.map((x) => spanLevels(x, span));
+  const phasors = signals.map((x, i) =>
+    harmonicPhasors(weightedSamples(x, span, levels[i].dcV), span, (2 * Math.PI) / samplesPerCycle, HIGHEST_HARMONIC),
+  );
   const amplitudes = phasors.map((p) => p.re.map((re, order) => Math.hypot(re, p.im[order])));
   const fundamentalRmsV = amplitudes.map((a) => a[1] / Math.SQRT2);
   const phaseDeg = phasors.map((p) => Math.atan2(p.im[1], p.re[1]) * DEG_PER_RAD);

@@ -33,6 +33,11 @@ export function measureFundamentalHz(x: Float64Array, sampleRateHz: number, name
     throw new Error(`${name} must hold at least ${MIN_SAMPLES} samples, got ${x.length}`);
   }
   let frequencyHz = coarseSpectrumPeakHz(x, sampleRateHz, name);
+  // The record mean is DC to within a fraction of a cycle's worth of the waveform; removing it
+  // keeps a large offset out of the segment phases (see weightedSamples).
+  let sumV = 0;
+  for (let i = 0; i < x.length; i++) sumV += x[i];
+  const meanV = sumV / x.length;
   for (let pass = 0; pass < MAX_REFINEMENTS; pass++) {
     const cycles = (x.length * frequencyHz) / sampleRateHz;
     const whole = Math.floor(cycles);
@@ -44,7 +49,7 @@ export function measureFundamentalHz(x: Float64Array, sampleRateHz: number, name
     const omega = (2 * Math.PI) / samplesPerCycle;
     const phaseAt = (startCycles: number): [number, number] => {
       const span = hannSpan(startCycles * samplesPerCycle, segmentCycles * samplesPerCycle, x.length);
-      const { re, im } = harmonicPhasors(weightedSamples(x, span), span, omega, 1);
+      const { re, im } = harmonicPhasors(weightedSamples(x, span, meanV), span, omega, 1);
       return [re[1], im[1]];
     };
     const [earlyRe, earlyIm] = phaseAt(0);

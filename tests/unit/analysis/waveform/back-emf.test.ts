@@ -132,6 +132,21 @@ describe('analyzeBackEmf on engineering examples', () => {
     expect(result.harmonicsPercent.uv[3]).toBeCloseTo(5, 4);
   });
 
+  it('when a 2nd, a 25th and a 26th harmonic are present, then THD sums exactly the orders 2…25', () => {
+    // IEEE Std 519-2014 definition over h = 2…25: √(2² + 0.5²)/100 = 2.0616 %; the 26th is outside
+    const harmonics = [
+      { order: 1, amplitudeV: 100 },
+      { order: 2, amplitudeV: 2, phaseRad: 1 },
+      { order: 25, amplitudeV: 0.5, phaseRad: -0.5 },
+      { order: 26, amplitudeV: 0.7 },
+    ];
+    const lines = balancedLines({ sampleRateHz: SAMPLE_RATE_HZ, electricalHz: ELECTRICAL_HZ, samples: samplesFor(10.37, SAMPLE_RATE_HZ, ELECTRICAL_HZ), harmonics });
+    const result = analyze(lines);
+    expect(result.thdPercent.wu).toBeCloseTo(Math.hypot(2, 0.5), 4);
+    expect(result.harmonicsPercent.wu[2]).toBeCloseTo(2, 4);
+    expect(result.harmonicsPercent.wu[25]).toBeCloseTo(0.5, 4);
+  });
+
   it('when the fundamentals are 462, 463 and 455 V RMS, then the NEMA MG 1 unbalance is 1.087 %', () => {
     // NEMA MG 1: mean 460 V, largest deviation 5 V → 100 × 5/460 = 1.087 %
     const spec = { sampleRateHz: SAMPLE_RATE_HZ, electricalHz: ELECTRICAL_HZ, samples: samplesFor(9.8, SAMPLE_RATE_HZ, ELECTRICAL_HZ) };
@@ -195,6 +210,26 @@ describe('analyzeBackEmf on engineering examples', () => {
     expect(result.cycles).toBe(2);
     expect(Math.abs(result.electricalHz / ELECTRICAL_HZ - 1)).toBeLessThan(1e-4);
     expect(Math.abs(result.harmonicsPercent.uv[5] / 3 - 1)).toBeLessThan(1e-3);
+  });
+});
+
+describe('analyzeBackEmf levels', () => {
+  const spec = { sampleRateHz: SAMPLE_RATE_HZ, electricalHz: ELECTRICAL_HZ, samples: samplesFor(6.77, SAMPLE_RATE_HZ, ELECTRICAL_HZ) };
+
+  it('when the waveform swings further below DC than above, then peakV is the larger excursion', () => {
+    // 100·sin θ + 20·cos 2θ reaches +80 V at 90° but −120 V at 270°; brute force on the continuous curve
+    const harmonics = [{ order: 1, amplitudeV: 100 }, { order: 2, amplitudeV: 20, phaseRad: Math.PI / 2 }];
+    const result = analyze(balancedLines({ ...spec, harmonics, dcV: 15 }));
+    const expected = continuousPeakV(harmonics);
+    expect(expected).toBeCloseTo(120, 6);
+    expect(result.peakV.uv).toBeLessThanOrEqual(expected * (1 + 1e-12));
+    expect(result.peakV.uv).toBeGreaterThan(expected * 0.999);
+  });
+
+  it('when a DC offset dwarfs the waveform, then the RMS about DC keeps its precision', () => {
+    // True RMS about DC of a 100 V-peak sine is 100/√2 whatever the offset (IEC 60050-103)
+    const result = analyze(balancedLines({ ...spec, harmonics: [{ order: 1, amplitudeV: 100 }], dcV: 1e6 }));
+    expect(Math.abs(result.rmsV.vw / (100 / Math.SQRT2) - 1)).toBeLessThan(1e-9);
   });
 });
 
