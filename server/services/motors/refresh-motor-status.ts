@@ -6,7 +6,9 @@ import type { Knex } from 'knex';
  * motors.status (so lists can filter and count by it) and recomputed in the same transaction as
  * every run, hold and release that can change it.
  */
-const activeHold = `EXISTS (SELECT 1 FROM holds h WHERE h.released_at IS NULL AND (h.motor_id = motors.id OR h.lot_id = motors.lot_id))`;
+// Two EXISTS rather than one OR, so that each probe uses its own (…, released_at) index.
+const activeHold = `(EXISTS (SELECT 1 FROM holds h WHERE h.motor_id = motors.id AND h.released_at IS NULL)
+  OR EXISTS (SELECT 1 FROM holds h WHERE h.lot_id = motors.lot_id AND h.released_at IS NULL))`;
 
 /** The status expression for a motor whose latest run has just been given `verdict`. */
 export function statusAfterRun(db: Knex, verdict: 'pass' | 'fail'): Knex.Raw {

@@ -9,6 +9,8 @@ import { stationByCode, stationOfClient, type StationRef } from './station-of-cl
 import { checkSerialAndLot, checkTimes } from './check-run-document.js';
 import { checkResults, judgeRun, type LabelledResult } from './judge-run.js';
 import { deriveCharacteristics } from './derive-characteristics.js';
+import { keepRawSamples, storeWaveformsAndReadings, type KeptRawData } from './store-waveforms-and-readings.js';
+import type { BlobStore } from '../../blob-store/blob-store.js';
 import { answerForRetry, bodySha256, type IngestOutcome } from './stored-run.js';
 import { evaluateSpcAfterIngest } from '../spc/evaluate-after-ingest.js';
 import { updateYieldRollups } from '../yield/update-yield-rollups.js';
@@ -18,6 +20,8 @@ export type IngestOptions = {
   clientId?: string;
   source?: 'station' | 'upload';
   now?: Date;
+  /** Where waveform samples are kept; needed only when a run carries waveforms. */
+  blobs?: BlobStore;
 };
 
 /**
@@ -29,28 +33,29 @@ export type IngestOptions = {
 export async function ingestTestRun(db: Knex, document: TestRunDocument, options: IngestOptions = {}): Promise<IngestOutcome> {
   const now = options.now ?? new Date();
   const sha256 = bodySha256(document);
-  const [station, product, lot] = await Promise.all([
+  // Independent reads in parallel: ingest latency is mostly round trips.
+  const [station, product, lot, limitSet, retried] = await Promise.all([
     findStation(db, document, options.clientId), loadProduct(db, document.product), loadLot(db, document.lot),
+    limitsInForce(db, { code: document.product }, new Date(document.startedAt)), answerForRetry(db, document.runId, sha256),
   ]);
-  const retried = await answerForRetry(db, document.runId, sha256);
   if (retried) return retried;
 
   const fields: FieldError[] = [...checkTimes(document, now)];
   if (!station) fields.push({ field: 'station', message: `station ${document.station} is not known` });
   if (!product) throw invalid([...fields, { field: 'product', message: `product ${document.product} is not known` }]);
   fields.push(...checkSerialAndLot(document, product, lot));
+  const derived = deriveCharacteristics({ product, waveforms: document.waveforms ?? [], readings: document.readings ?? [], posted: document.results });
   const labelled: LabelledResult[] = [
     ...document.results.map((result, i) => ({ result, field: `results[${i}]` })),
-    ...deriveCharacteristics({ product, waveforms: document.waveforms ?? [], readings: document.readings ?? [] })
-      .map((result, i) => ({ result, field: `derived[${i}]` })),
+    ...derived.results.map((result, i) => ({ result, field: `derived[${i}]` })),
   ];
-  fields.push(...checkResults(labelled, product));
-  const limitSet = await limitsInForce(db, product.id, new Date(document.startedAt));
+  fields.push(...derived.fields, ...checkResults(labelled, product));
   if (!limitSet) fields.push({ field: 'startedAt', message: `no approved limit revision of ${product.code} was in force at ${document.startedAt}` });
   if (fields.length > 0 || !station || !lot || !limitSet) throw invalid(fields);
 
   const judged = judgeRun(labelled.map((l) => l.result), product, limitSet.limits);
-  const run = { document, sha256, station, productId: product.id, lotId: lot.id, limitSet, judged, source: options.source ?? 'station' };
+  const raw = await keepRawSamples(options.blobs, derived);
+  const run = { document, sha256, station, productId: product.id, lotId: lot.id, limitSet, judged, raw, source: options.source ?? 'station' };
   for (let attempt = 1; ; attempt++) {
     try {
       return { status: 201, body: await db.transaction((trx) => storeRun(trx, run, now)) };
@@ -76,7 +81,7 @@ async function findStation(db: Knex, document: TestRunDocument, clientId: string
 
 type RunToStore = {
   document: TestRunDocument; sha256: string; station: StationRef; productId: number; lotId: number;
-  limitSet: NonNullable<Awaited<ReturnType<typeof limitsInForce>>>; judged: ReturnType<typeof judgeRun>; source: 'station' | 'upload';
+  limitSet: NonNullable<Awaited<ReturnType<typeof limitsInForce>>>; judged: ReturnType<typeof judgeRun>; raw: KeptRawData; source: 'station' | 'upload';
 };
 
 async function storeRun(trx: Knex.Transaction, run: RunToStore, now: Date): Promise<TestRunResponse> {
@@ -99,6 +104,7 @@ async function storeRun(trx: Knex.Transaction, run: RunToStore, now: Date): Prom
   await trx('measurements').insert(judged.results.map((r) => ({
     run_id: runId, characteristic_id: r.characteristicId, value: r.value, lsl: r.lsl, usl: r.usl, verdict: r.verdict,
   })));
+  await storeWaveformsAndReadings(trx, Number(runId), run.raw);
   await trx('motors').where({ id: motor.id }).update({
     attempts: attempt, latest_run_id: runId, last_station_id: station.id, last_tested_at: new Date(document.finishedAt),
     status: statusAfterRun(trx, judged.verdict),

@@ -8,7 +8,9 @@ export type LimitSetInForce = { id: number; revision: number; effectiveFrom: Dat
  * latest effective_from not after that moment. Read fresh each time, because approving a new
  * revision must take effect at once; the limits themselves are cached by set id.
  */
-export async function limitsInForce(db: Knex, productId: number, at: Date): Promise<LimitSetInForce | null> {
+export async function limitsInForce(db: Knex, product: { id: number } | { code: string }, at: Date): Promise<LimitSetInForce | null> {
+  // By code, ingest can ask this in parallel with loading the product itself.
+  const productId = 'id' in product ? product.id : db('products').select('id').where({ code: product.code });
   const set = await db('limit_sets')
     .where({ product_id: productId, status: 'approved' })
     .andWhere('effective_from', '<=', at)
