@@ -1,7 +1,13 @@
 import { useParams } from 'react-router-dom';
-import { NotBuiltYet } from '../components/NotBuiltYet';
+import { PageHeader } from '../components/PageHeader';
+import { SignalRecord } from '../features/signals/components/SignalRecord';
 
 export default function SignalRoute() {
   const { id = '' } = useParams();
-  return <NotBuiltYet title="Signal" area="SPC signal" subject={<>Signal <span className="figures">{id}</span></>} />;
+  return (
+    <div>
+      <PageHeader title={`Signal ${id}`} description="Investigate, contain and close." />
+      <SignalRecord id={id} />
+    </div>
+  );
 }

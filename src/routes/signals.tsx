@@ -1,5 +1,11 @@
-import { NotBuiltYet } from '../components/NotBuiltYet';
+import { PageHeader } from '../components/PageHeader';
+import { SignalInbox } from '../features/signals/components/SignalInbox';
 
 export default function SignalsRoute() {
-  return <NotBuiltYet title="Signals" area="SPC signal" />;
+  return (
+    <div>
+      <PageHeader title="Signals" description="Control chart rules broken on frozen limits, from the first alarm to the disposition." />
+      <SignalInbox />
+    </div>
+  );
 }
