@@ -96,7 +96,7 @@ describe('Setup API: limit revisions', () => {
     expect(difference.body.difference.rows[1].change).toBe('unchanged');
   });
 
-  it('when revision 2 is approved for later, then revision 1 stays approved and in force until then, and retiring skips it', async () => {
+  it('when revision 2 is approved for later, then revision 1 stays approved and in force until then, revision 2 compares with it, and retiring skips it', async () => {
     await productWithCharacteristics(quality, 'LR-150');
     const first = await draftWithLimits('LR-150');
     await quality2.post(`${setupApi}/limit-sets/${first}/approve`, { effectiveFrom: new Date().toISOString() }).expect(200);
@@ -110,6 +110,11 @@ describe('Setup API: limit revisions', () => {
     const list = await quality.get(`${setupApi}/products/LR-150/limit-sets`).expect(200);
     expect(list.body.limitSets.map((s: { revision: number; status: string; inForce: boolean }) => [s.revision, s.status, s.inForce]))
       .toEqual([[2, 'approved', false], [1, 'approved', true]]);
+
+    const replaced = await quality.get(`${setupApi}/limit-sets/${second}/difference`).expect(200);
+    expect(replaced.body.difference.comparedWithRevision).toBe(1);
+    const firstEver = await quality.get(`${setupApi}/limit-sets/${first}/difference`).expect(200);
+    expect(firstEver.body.difference).toMatchObject({ comparedWithRevision: null, changedCount: 2 });
 
     await quality2.post(`${setupApi}/limit-sets/${first}/retire`, { reason: 'superseded' }).expect(200);
     expect(await findLimitSetInForce(server.db, product.id, new Date())).toBeUndefined();

@@ -18,12 +18,14 @@ function changeOf(before: Bounds | null, after: Bounds | null): LimitChange {
 }
 
 /**
- * Per characteristic of the product: the limits of the revision in force now (before) and of the
- * given revision (after), so a reviewer sees exactly what approval would change.
+ * Per characteristic of the product, before and after. A draft is compared with the revision in
+ * force now (what approval would change); an approved or retired revision with the one that was
+ * in force when it took effect (what it changed).
  */
 export async function limitSetDifference(db: Knex, id: number, now = new Date()) {
   const row = await findLimitSetRow(db, id);
-  const inForce = await findLimitSetInForce(db, row.product_id, now, { excludeId: id });
+  const at = row.status === 'draft' || !row.effective_from ? now : row.effective_from;
+  const inForce = await findLimitSetInForce(db, row.product_id, at, { excludeId: id });
   const beforeLimits = inForce ? await limitsOf(db, inForce.id) : [];
   const afterLimits = await limitsOf(db, id);
   const characteristics = await characteristicRowsOf(db, row.product_id);
@@ -35,6 +37,7 @@ export async function limitSetDifference(db: Knex, id: number, now = new Date())
   return {
     limitSetId: id,
     revision: row.revision,
+    status: row.status,
     comparedWithRevision: inForce?.revision ?? null,
     rows,
     changedCount: rows.filter((r) => r.change !== 'unchanged').length,

@@ -64,6 +64,7 @@ const boundsSchema = z.object({ lsl: z.number().nullable(), nominal: z.number().
 export const differenceSchema = z.object({
   limitSetId: z.number(),
   revision: z.number(),
+  status: z.enum(['draft', 'approved', 'retired']),
   comparedWithRevision: z.number().nullable(),
   changedCount: z.number(),
   rows: z.array(z.object({

@@ -19,14 +19,18 @@ function localNow(): string {
   return new Date(now.getTime() - now.getTimezoneOffset() * 60_000).toISOString().slice(0, 16);
 }
 
-export function ApproveRevisionForm({ productCode, draft }: { productCode: string; draft: LimitSetView }) {
+type ApproveRevisionFormProps = { productCode: string; draft: LimitSetView; onApproved: () => void };
+
+export function ApproveRevisionForm({ productCode, draft, onApproved }: ApproveRevisionFormProps) {
   const approve = useApproveLimitSet(productCode, draft.id);
   const { register, handleSubmit, formState: { errors } } = useForm<Values>({
     resolver: zodResolver(approveFormSchema),
     defaultValues: { effectiveFrom: localNow(), reason: '' },
   });
-  const onSubmit = handleSubmit((values) =>
-    approve.mutateAsync({ effectiveFrom: new Date(values.effectiveFrom).toISOString(), reason: values.reason }));
+  const onSubmit = handleSubmit(async (values) => {
+    await approve.mutateAsync({ effectiveFrom: new Date(values.effectiveFrom).toISOString(), reason: values.reason });
+    onApproved();
+  });
 
   return (
     <form onSubmit={onSubmit} aria-label={`Approve revision ${draft.revision}`} className="space-y-3 rounded-md border border-copper-200 bg-copper-50 p-3">

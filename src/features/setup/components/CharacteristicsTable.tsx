@@ -3,6 +3,7 @@ import { Button } from '../../../components/Button';
 import { EmptyState } from '../../../components/EmptyState';
 import type { Characteristic } from '../api/setup-schemas';
 import { CharacteristicForm } from './CharacteristicForm';
+import { HighVoltageNote } from './HighVoltageNote';
 
 type CharacteristicsTableProps = { productCode: string; characteristics: Characteristic[]; canManage: boolean };
 
@@ -12,6 +13,7 @@ export function CharacteristicsTable({ productCode, characteristics, canManage }
   const close = () => setEditing(null);
   return (
     <div className="space-y-3">
+      <HighVoltageNote characteristics={characteristics} />
       {characteristics.length === 0 ? (
         <EmptyState title="No characteristics yet">Add what the end-of-line stand measures for this product.</EmptyState>
       ) : (

@@ -13,18 +13,18 @@ export function HipotPanel({ productCode }: { productCode: string }) {
   return (
     <div className="space-y-3">
       <HighVoltageCaution context={`hipot ${formatNumber(acVrms, { maxDigits: 0, unit: 'V' })} AC for ${durationS} s`} />
-      <dl className="grid grid-cols-2 gap-3 text-sm md:grid-cols-3">
+      <dl className="grid gap-3 text-sm sm:grid-cols-2">
         <div>
           <dt className="text-xs uppercase tracking-wide text-graphite-500">Type test (winding to frame)</dt>
-          <dd className="figures text-lg text-graphite-900">{formatNumber(acVrms, { maxDigits: 0, unit: 'V' })} AC · {durationS} s</dd>
+          <dd className="figures whitespace-nowrap text-lg text-graphite-900">{formatNumber(acVrms, { maxDigits: 0, unit: 'V' })} AC · {durationS} s</dd>
           <dd className="text-xs text-graphite-500">{source}</dd>
         </div>
         <div>
           <dt className="text-xs uppercase tracking-wide text-graphite-500">Shortened routine test</dt>
-          <dd className="figures text-lg text-graphite-900">{formatNumber(production.acVrms, { maxDigits: 0, unit: 'V' })} AC · {production.durationS} s</dd>
+          <dd className="figures whitespace-nowrap text-lg text-graphite-900">{formatNumber(production.acVrms, { maxDigits: 0, unit: 'V' })} AC · {production.durationS} s</dd>
           <dd className="text-xs text-graphite-500">{production.source}</dd>
         </div>
-        <div>
+        <div className="sm:col-span-2">
           <dt className="text-xs uppercase tracking-wide text-graphite-500">From the rating</dt>
           <dd className="figures text-graphite-900">{formatNumber(ratedVoltageV, { unit: 'V' })} · {formatNumber(ratedPowerKw, { unit: 'kW' })}</dd>
         </div>

@@ -19,17 +19,19 @@ function BoundsCell({ bounds }: { bounds: Bounds }) {
   );
 }
 
-/** What approving this revision would change, characteristic by characteristic (LSL · nominal · USL). */
+/** What this revision changes (or, for a draft, would change), characteristic by characteristic. */
 export function LimitDifferenceTable({ productCode, limitSetId }: { productCode: string; limitSetId: number }) {
   const difference = useLimitSetDifference(productCode, limitSetId);
   if (difference.isPending) return <Spinner label="Comparing with the revision in force…" />;
   if (difference.isError) return <ErrorNote error={difference.error} title="Could not compare the revisions" />;
-  const { rows, comparedWithRevision, revision, changedCount } = difference.data;
-  const against = comparedWithRevision === null ? 'no revision in force' : `revision ${comparedWithRevision} (in force)`;
+  const { rows, comparedWithRevision, revision, changedCount, status } = difference.data;
+  const against = comparedWithRevision === null
+    ? 'no earlier revision'
+    : status === 'draft' ? `revision ${comparedWithRevision}, in force now` : `revision ${comparedWithRevision}, which it followed`;
   return (
     <table className="w-full text-left text-sm">
       <caption className="mb-2 text-left text-sm text-graphite-700">
-        Difference of revision {revision} from {against}: {changedCount} {changedCount === 1 ? 'change' : 'changes'}
+        Revision {revision} against {against}: {changedCount} {changedCount === 1 ? 'change' : 'changes'}
       </caption>
       <thead className="border-b border-paper-300 text-xs uppercase tracking-wide text-graphite-500">
         <tr><th className="py-2">Characteristic</th><th>Unit</th><th>Before (LSL · nom · USL)</th><th>After (LSL · nom · USL)</th><th>Change</th></tr>

@@ -59,7 +59,10 @@ function ProductRevisions({ productCode }: { productCode: string }) {
           <RevisionList limitSets={list} selectedId={selected?.id} onSelect={setChosenId} />
         )}
       </div>
-      {selected ? <RevisionDetail productCode={productCode} limitSet={selected} characteristics={product.data.characteristics} /> : null}
+      {selected ? (
+        // Keeps the just-approved revision on screen instead of jumping to the one in force.
+        <RevisionDetail productCode={productCode} limitSet={selected} characteristics={product.data.characteristics} onApproved={() => setChosenId(selected.id)} />
+      ) : null}
     </div>
   );
 }

@@ -4,16 +4,17 @@ import type { Characteristic, LimitSetView } from '../api/setup-schemas';
 import { ApproveRevisionForm } from './ApproveRevisionForm';
 import { DraftLimitsEditor } from './DraftLimitsEditor';
 import { LimitDifferenceTable } from './LimitDifferenceTable';
+import { HighVoltageNote } from './HighVoltageNote';
 import { DiscardDraftButton, RetireRevisionForm } from './RevisionLifecycleActions';
 import { SectionCard } from './form-parts';
 
-type RevisionDetailProps = { productCode: string; limitSet: LimitSetView; characteristics: Characteristic[] };
+type RevisionDetailProps = { productCode: string; limitSet: LimitSetView; characteristics: Characteristic[]; onApproved: () => void };
 
 /**
  * One revision: its author edits it while it is a draft; another quality user approves it. The
  * buttons follow the server's permissions and authorship flags; the server enforces both anyway.
  */
-export function RevisionDetail({ productCode, limitSet, characteristics }: RevisionDetailProps) {
+export function RevisionDetail({ productCode, limitSet, characteristics, onApproved }: RevisionDetailProps) {
   const canAuthor = useCan('limits:author');
   const canApprove = useCan('limits:approve');
   const isDraft = limitSet.status === 'draft';
@@ -21,6 +22,7 @@ export function RevisionDetail({ productCode, limitSet, characteristics }: Revis
 
   return (
     <div className="space-y-4">
+      <HighVoltageNote characteristics={characteristics} />
       <SectionCard title={`Revision ${limitSet.revision} · ${limitSet.inForce ? 'in force' : limitSet.status}`}
         actions={isDraft && canAuthor ? <DiscardDraftButton productCode={productCode} limitSet={limitSet} /> : null}>
         <p className="mb-3 text-sm text-graphite-600">
@@ -35,10 +37,10 @@ export function RevisionDetail({ productCode, limitSet, characteristics }: Revis
           <p className="text-sm text-graphite-600">Only {limitSet.authoredByName} edits this draft; review its difference below.</p>
         ) : null}
       </SectionCard>
-      <SectionCard title="Difference from the revision in force">
+      <SectionCard title="Difference">
         <LimitDifferenceTable productCode={productCode} limitSetId={limitSet.id} />
       </SectionCard>
-      {isDraft && canApprove && !limitSet.authoredByYou ? <ApproveRevisionForm productCode={productCode} draft={limitSet} /> : null}
+      {isDraft && canApprove && !limitSet.authoredByYou ? <ApproveRevisionForm productCode={productCode} draft={limitSet} onApproved={onApproved} /> : null}
       {isDraft && canApprove && limitSet.authoredByYou ? (
         <p className="text-sm text-graphite-600">You wrote this revision, so a second quality user approves it.</p>
       ) : null}
