@@ -7,6 +7,7 @@ import { resetPlantTables } from './reset.js';
 import { writeLots } from './write-lots.js';
 import { writeProducts } from './write-products.js';
 import { writeStations } from './write-stations.js';
+import { controlLimitsFrozenDaysAgo, freezeKeControlLimits } from './write-control-limits.js';
 
 /** The demo's fixed PRNG seed: the same plant, serials and values on every run. */
 export const demoSeed = 20_261_201;
@@ -15,7 +16,8 @@ export type DemoSeedReport = { motors: number; runs: number; elapsedMs: number }
 
 /**
  * Builds the invented demo plant from scratch: setup data through Setup's audited operations,
- * lots, then every test run through the real ingest service.
+ * lots, then every test run through the real ingest service: first the weeks before quality
+ * froze Ke's control limits, then the days since, which ingest judges against them.
  */
 export async function seedDemoPlant(db: Knex, options: { motors: number; now?: Date }): Promise<DemoSeedReport> {
   const startedMs = Date.now();
@@ -27,6 +29,11 @@ export async function seedDemoPlant(db: Knex, options: { motors: number; now?: D
   await writeStations(db, clock);
   await writeLots(db, clock);
   const motors = planMotors(demoSeed, clock, options.motors);
-  const runs = await ingestPlannedRuns(db, motors);
+  const frozenAt = clock.at(controlLimitsFrozenDaysAgo);
+  const baseline = motors.filter((m) => m.attempts[0].startedAt < frozenAt);
+  const baselineRuns = await ingestPlannedRuns(db, baseline);
+  await freezeKeControlLimits(db, clock);
+  const liveRuns = await ingestPlannedRuns(db, motors.filter((m) => m.attempts[0].startedAt >= frozenAt));
+  const runs = baselineRuns + liveRuns;
   return { motors: motors.length, runs, elapsedMs: Date.now() - startedMs };
 }

@@ -87,6 +87,15 @@ describe('demo plant seed', () => {
     expect(mean(ke.slice(-20)) - mean(ke.slice(0, 20))).toBeGreaterThan(1.0);
   });
 
+  it('when the drifting lot ran after Ke\'s control limits were frozen, then ingest opened signals on it first', async () => {
+    const signals = await db('signals').join('lots', 'lots.id', 'signals.lot_id')
+      .join('characteristics', 'characteristics.id', 'signals.characteristic_id')
+      .orderBy('signals.first_run_id').select('lots.code as lot', 'characteristics.code as characteristic');
+    expect(signals.length).toBeGreaterThan(0);
+    expect(signals[0]).toEqual({ lot: driftingLotCode, characteristic: 'ke' });
+    expect(await db('control_limits').where({ status: 'frozen' }).first('chart_kind')).toEqual({ chart_kind: 'ewma' });
+  });
+
   it('when runs straddle the Ke tightening, then each is judged by the revision in force at its start', async () => {
     const revisionsBy = await db('test_runs').join('limit_sets', 'limit_sets.id', 'test_runs.limit_set_id')
       .join('products', 'products.id', 'limit_sets.product_id').where('products.code', 'PM-150')

@@ -17,7 +17,7 @@ export function pm150Motor({ prng, lot, keDriftPct }: MotorContext): MotorModel 
     crimpPhase: prng.int(0, 2), crimpRise: prng.uniform(0.035, 0.05),
     ir1MinMegohm: prng.logNormal(9000, 0.35), moistureFactor: prng.uniform(0.012, 0.02),
     dar: prng.normal(1.45, 0.05), leakageMa: atLeast(0.8, prng.normal(1.9, 0.22)), contaminatedMa: prng.uniform(3.3, 4.6),
-    ke: nominalKe * (1 + (lot.keShiftPct + keDriftPct) / 100 + prng.normal(0, 0.0055)),
+    ke: nominalKe * (1 + (lot.keShiftPct + keDriftPct) / 100 + prng.normal(0, 0.0065)),
     lineWeights: [0, 1, 2].map(() => 1 + prng.normal(0, 0.0015)),
     weakLine: prng.int(0, 2), magnetLoss: prng.uniform(0.035, 0.055),
     thdPercent: atLeast(0.4, prng.normal(1.45, 0.25)),

@@ -15,7 +15,7 @@ export type MotorContext = {
 export type MotorModel = { measure(faults: ReadonlySet<FaultKind>): Record<string, number> };
 
 export function drawLotProcess(prng: Prng): LotProcess {
-  return { keShiftPct: prng.normal(0, 0.45), resistanceShiftPct: prng.normal(0, 0.5), resolverShiftDeg: prng.normal(0, 0.4) };
+  return { keShiftPct: prng.normal(0, 0.15), resistanceShiftPct: prng.normal(0, 0.5), resolverShiftDeg: prng.normal(0, 0.4) };
 }
 
 export const round = (value: number, decimals: number): number => Number(value.toFixed(decimals));
