@@ -66,7 +66,10 @@ describe('sign-in through the IdP fake and GET /api/me', () => {
   it('when returnTo points off-site, then sign-in returns to the app root instead', async () => {
     const response = await request(server.url).get('/auth/login?returnTo=//evil.example/x');
     expect(response.status).toBe(302);
-    const session = await server.db('sessions').orderBy('expired', 'desc').first();
+    // The signed cookie is "s:<sid>.<signature>"; find exactly this login's session row.
+    const cookie = decodeURIComponent(String(response.headers['set-cookie']).split(';')[0].split('=')[1]);
+    const sid = cookie.slice(2, cookie.lastIndexOf('.'));
+    const session = await server.db('sessions').where({ sid }).first();
     const stored = typeof session.sess === 'string' ? JSON.parse(session.sess) : session.sess;
     expect(stored.login.returnTo).toBe('/');
   });
