@@ -20,13 +20,20 @@ const faultRate = 0.035;
 const serialPrefix = { 'PM-150': 'PM150', 'IM-4P': 'IM4P', 'DC-24A': 'DC24A' } as const;
 const motorsPerDay = { 'PM-150': 1, 'IM-4P': 1.3, 'DC-24A': 2 } as const;
 
-/** Lot sizes for a demo of about `totalMotors` motors: fixed story lots, the rest by production time. */
+/**
+ * Lot sizes for a demo of `totalMotors` motors: fixed story lots, the rest shared by production
+ * time (largest remainders, so the sizes add up), never below the smallest lot the story needs.
+ */
 export function lotSizes(totalMotors: number): Map<string, number> {
   const fixed = demoLots.reduce((sum, lot) => sum + (lot.fixedMotors ?? 0), 0);
+  const shared = demoLots.filter((lot) => !lot.fixedMotors);
   const weight = (lot: DemoLot) => (lot.startDaysAgo - lot.endDaysAgo) * motorsPerDay[lot.productCode];
-  const totalWeight = demoLots.filter((lot) => !lot.fixedMotors).reduce((sum, lot) => sum + weight(lot), 0);
-  return new Map(demoLots.map((lot) => [lot.code, lot.fixedMotors
-    ?? Math.max(minimumLotMotors, Math.round(((totalMotors - fixed) * weight(lot)) / totalWeight))]));
+  const totalWeight = shared.reduce((sum, lot) => sum + weight(lot), 0);
+  const exact = shared.map((lot) => ({ lot, share: (Math.max(0, totalMotors - fixed) * weight(lot)) / totalWeight }));
+  const leftOver = Math.max(0, totalMotors - fixed) - exact.reduce((sum, e) => sum + Math.floor(e.share), 0);
+  const roundedUp = new Set([...exact].sort((a, b) => (b.share % 1) - (a.share % 1)).slice(0, leftOver).map((e) => e.lot.code));
+  const sizes = new Map(exact.map((e) => [e.lot.code, Math.max(minimumLotMotors, Math.floor(e.share) + (roundedUp.has(e.lot.code) ? 1 : 0))]));
+  return new Map(demoLots.map((lot) => [lot.code, lot.fixedMotors ?? (sizes.get(lot.code) as number)]));
 }
 
 /** Every motor of the demo with its planned runs, deterministic for a seed, size and day. */
