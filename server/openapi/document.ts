@@ -31,7 +31,7 @@ const operations: Record<string, Record<string, Operation>> = {
     summary: 'Store one test run (idempotent per runId)', security: 'client with scope test-runs:write', body: 'TestRunDocument',
     responses: {
       201: { description: 'stored and judged', schema: 'TestRunResponse' }, 200: { description: 'identical retry: the first answer', schema: 'TestRunResponse' },
-      403: problem('token station differs from station, or scope missing'), 409: problem('runId reused with another body'), 422: problem('invalid fields, each named'),
+      403: problem('token station differs from station, or scope missing'), 409: problem('runId reused with another body'), 413: problem('a waveform above 500k samples per channel, or a body above 64 MB'), 422: problem('invalid fields, each named'),
     },
   } },
   '/api/v1/motors': { get: { summary: 'Motors, keyset-paged', security: readers, query: 'MotorListQuery', responses: { 200: { description: 'one page', schema: 'MotorList' } } } },

@@ -67,6 +67,7 @@ export const motorRecordSchema = z.object({
       value: z.number(), lsl: limitValue, nominal: limitValue, usl: limitValue, verdict,
     })),
     waveforms: z.array(z.object({ kind: z.string(), summary: z.unknown() })),
+    readings: z.array(z.object({ kind: z.string(), reading: z.unknown() })),
   })).describe('latest first'),
   auditEvents: z.array(z.object({
     id: z.number().int(), occurredAt: z.string(), actor: z.string(), actorRole: z.string().nullable(), action: z.string(),

@@ -11,11 +11,18 @@ import { setupRouter } from './v1/setup/index.js';
 import { spcRouter } from './v1/spc.js';
 import { signalsRouter } from './v1/signals.js';
 import { yieldRouter } from './v1/yield.js';
+import { join } from 'node:path';
+import { fileBlobStore } from '../blob-store/file-blob-store.js';
+
+// A run may carry waveforms of up to 4 × 500k samples (MAX_SAMPLES_PER_CHANNEL); as JSON with
+// full-precision numbers that is about 42 MB, so only this route accepts bodies that large.
+const TEST_RUN_BODY_LIMIT = '64mb';
 
 /** Every API router, one per resource. */
 export function apiRouter({ db, config }: AppDeps) {
   const router = Router();
   router.use('/health', healthRouter(db));
+  router.use('/v1/test-runs', json({ limit: TEST_RUN_BODY_LIMIT }));
   router.use(json({ limit: '1mb' }));
   router.use('/me', meRouter());
   router.use('/v1/audit', auditRouter(db));
@@ -25,7 +32,7 @@ export function apiRouter({ db, config }: AppDeps) {
   router.use('/v1/spc', spcRouter(db));
   router.use('/v1/signals', signalsRouter(db));
   router.use('/v1/yield', yieldRouter(db));
-  router.use('/v1', v1Router(db));
+  router.use('/v1', v1Router(db, fileBlobStore(join(config.dataDir, 'blobs'))));
   router.use(openapiRouter(config.oidc.issuer));
   return router;
 }

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { backEmfWaveformSchema, oncePerKind, readingSchema } from './raw-data.js';
 
 /**
  * The document a test stand posts once per run, and the answer it gets back. Objects are strict:
@@ -13,9 +14,6 @@ export const resultInputSchema = z.strictObject({
   unit: z.string().trim().min(1).max(32),
 });
 
-/** Raw channel data for derived characteristics; its shape belongs to deriveCharacteristics. */
-const passThroughItem = z.record(z.string(), z.unknown());
-
 export const testRunDocumentSchema = z.strictObject({
   runId: z.uuid({ error: 'must be a UUID chosen by the stand' }),
   serial: z.string().trim().min(1).max(64),
@@ -27,8 +25,8 @@ export const testRunDocumentSchema = z.strictObject({
   operatorBadge: z.string().trim().min(1).max(64),
   programVersion: z.string().trim().min(1).max(64),
   results: z.array(resultInputSchema).min(1, 'a run carries at least one result').max(500),
-  waveforms: z.array(passThroughItem).max(32).optional(),
-  readings: z.array(passThroughItem).max(64).optional(),
+  waveforms: oncePerKind(backEmfWaveformSchema, 4).optional(),
+  readings: oncePerKind(readingSchema, 8).optional(),
 }).superRefine((doc, ctx) => {
   const firstIndex = new Map<string, number>();
   doc.results.forEach((result, index) => {

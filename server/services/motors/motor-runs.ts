@@ -9,6 +9,8 @@ export type RunView = {
   station: { code: string; line: string }; operatorBadge: string; programVersion: string;
   limitRevision: number | null; calibrationOk: boolean; calibrationDue: string;
   results: RunResultView[]; waveforms: Array<{ kind: string; summary: unknown }>;
+  /** Raw readings the stand posted (insulation, hipot, winding resistance), as posted. */
+  readings: Array<{ kind: string; reading: unknown }>;
 };
 
 /**
@@ -16,7 +18,7 @@ export type RunView = {
  * of the revision it was judged by. Three indexed queries however many runs the motor has.
  */
 export async function runsOfMotor(db: Knex, motorId: number): Promise<RunView[]> {
-  const [runs, results, waveforms] = await Promise.all([
+  const [runs, results, waveforms, readings] = await Promise.all([
     db('test_runs').join('stations', 'stations.id', 'test_runs.station_id')
       .leftJoin('limit_sets', 'limit_sets.id', 'test_runs.limit_set_id')
       .where('test_runs.motor_id', motorId).orderBy('test_runs.attempt', 'desc')
@@ -29,6 +31,8 @@ export async function runsOfMotor(db: Knex, motorId: number): Promise<RunView[]>
         'measurements.value', 'measurements.lsl', 'limits.nominal', 'measurements.usl', 'measurements.verdict'),
     db('test_runs').join('waveforms', 'waveforms.run_id', 'test_runs.id')
       .where('test_runs.motor_id', motorId).orderBy('waveforms.id').select('waveforms.run_id', 'waveforms.kind', 'waveforms.summary_json'),
+    db('test_runs').join('raw_readings', 'raw_readings.run_id', 'test_runs.id')
+      .where('test_runs.motor_id', motorId).orderBy('raw_readings.kind').select('raw_readings.run_id', 'raw_readings.kind', 'raw_readings.reading_json'),
   ]);
   return runs.map((run) => ({
     runId: run.run_uuid, attempt: run.attempt, verdict: run.verdict,
@@ -42,6 +46,7 @@ export async function runsOfMotor(db: Knex, motorId: number): Promise<RunView[]>
       value: r.value, lsl: r.lsl, nominal: r.nominal, usl: r.usl, verdict: r.verdict,
     })),
     waveforms: waveforms.filter((w) => w.run_id === run.id).map((w) => ({ kind: w.kind, summary: parseJson(w.summary_json) })),
+    readings: readings.filter((r) => r.run_id === run.id).map((r) => ({ kind: r.kind, reading: parseJson(r.reading_json) })),
   }));
 }
 

@@ -13,6 +13,8 @@ const productTtlMs = 10_000;
 export type CharacteristicRef = { id: number; code: string; name: string; unit: string; testStep: string; derived: boolean; sortOrder: number };
 export type ProductRef = {
   id: number; code: string; name: string; motorKind: string; serialPattern: RegExp; serialPatternText: string;
+  /** What derived characteristics need: angle ratios and the conductor's temperature coefficient. */
+  polePairs: number; resolverPolePairs: number | null; windingMaterial: 'copper' | 'aluminium';
   characteristics: Map<string, CharacteristicRef>;
 };
 export type LotRef = { id: number; code: string; productId: number };
@@ -31,12 +33,13 @@ export function forgetReferenceData(): void {
 export async function loadProduct(db: Knex, code: string): Promise<ProductRef | null> {
   const cached = products.get(code);
   if (cached && cached.expiresAtMs > Date.now()) return cached.value;
-  const row = await db('products').where({ code }).first('id', 'code', 'name', 'motor_kind', 'serial_pattern');
+  const row = await db('products').where({ code }).first('id', 'code', 'name', 'motor_kind', 'serial_pattern', 'pole_pairs', 'resolver_pole_pairs', 'winding_material');
   if (!row) return null;
   const characteristicRows = await db('characteristics').where({ product_id: row.id })
     .select('id', 'code', 'name', 'unit', 'test_step', 'derived', 'sort_order').orderBy(['sort_order', 'id']);
   const value: ProductRef = {
     id: row.id, code: row.code, name: row.name, motorKind: row.motor_kind,
+    polePairs: row.pole_pairs, resolverPolePairs: row.resolver_pole_pairs, windingMaterial: row.winding_material,
     // Anchored so that a pattern like "PM-\d+" cannot match inside a longer serial.
     serialPattern: new RegExp(`^(?:${row.serial_pattern})$`),
     serialPatternText: row.serial_pattern,
