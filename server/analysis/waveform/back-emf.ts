@@ -1,7 +1,7 @@
 import { DEG_PER_RAD, wrapDegrees360 } from './angles.js';
 import { loudest, measureFundamentalHz, wholeCyclesIn } from './fundamental-frequency.js';
 import { harmonicPhasors } from './goertzel.js';
-import { hannSpan, spanLevels, weightedSamples } from './hann-span.js';
+import { hannSpan, spanLevels } from './hann-span.js';
 import { requirePositive, requirePositiveInteger, requireSameLength, toFiniteSamples, type Samples } from './validate.js';
 
 /** Highest harmonic evaluated: the output is keyed 2…25 (IEC 61000-2-2 would go to the 40th). */
@@ -79,7 +79,7 @@ export function analyzeBackEmf(input: BackEmfInput): BackEmfAnalysis {
   const span = hannSpan(0, cycles * samplesPerCycle, signals[0].length);
   const levels = signals.map((x) => spanLevels(x, span));
   const phasors = signals.map((x, i) =>
-    harmonicPhasors(weightedSamples(x, span, levels[i].dcV), span, (2 * Math.PI) / samplesPerCycle, HIGHEST_HARMONIC),
+    harmonicPhasors(x, span, levels[i].dcV, (2 * Math.PI) / samplesPerCycle, HIGHEST_HARMONIC),
   );
   const amplitudes = phasors.map((p) => p.re.map((re, order) => Math.hypot(re, p.im[order])));
   const fundamentalRmsV = amplitudes.map((a) => a[1] / Math.SQRT2);

@@ -1,8 +1,11 @@
 import { harmonicPhasors } from './goertzel.js';
-import { hannSpan, weightedSamples } from './hann-span.js';
+import { hannSpan } from './hann-span.js';
 import { coarseSpectrumPeakHz } from './spectrum-peak.js';
 
 const MAX_REFINEMENTS = 12;
+// The precision comes from the distance between the two segments more than from their length,
+// so long records use short segments at either end and the refinement reads a fraction of them.
+const MAX_SEGMENT_CYCLES = 8;
 // Each pass shrinks the error by orders of magnitude, so once a correction is this small the
 // corrected value is already exact to rounding; stopping here saves a pass.
 const LAST_STEP_RELATIVE = 1e-9;
@@ -22,7 +25,8 @@ export function wholeCyclesIn(recordLength: number, sampleRateHz: number, freque
  * Fundamental frequency of a record, in Hz, measured without assuming coherent sampling.
  * Method: coarse Hann-FFT peak (spectrum-peak.ts), then phase-difference refinement: the
  * fundamental's phase is taken by a Hann-weighted single-frequency DFT over a segment of whole
- * cycles at the start of the record and over as many cycles K whole cycles later; the phase
+ * cycles (at most 8) at the start of the record and over as many cycles K whole cycles later,
+ * at the end of the record's whole cycles; the phase
  * advance between them, Δφ = 2π·K·Δf/f, corrects the frequency. Because the two segments are
  * exactly K cycles apart, at the true frequency they hold the same waveform, so harmonics and DC
  * leave Δφ untouched and the iteration settles on the true frequency (the IEC 61000-4-7
@@ -34,7 +38,7 @@ export function measureFundamentalHz(x: Float64Array, sampleRateHz: number, name
   }
   let frequencyHz = coarseSpectrumPeakHz(x, sampleRateHz, name);
   // The record mean is DC to within a fraction of a cycle's worth of the waveform; removing it
-  // keeps a large offset out of the segment phases (see weightedSamples).
+  // keeps a large offset out of the segment phases (see harmonicPhasors).
   let sumV = 0;
   for (let i = 0; i < x.length; i++) sumV += x[i];
   const meanV = sumV / x.length;
@@ -43,13 +47,13 @@ export function measureFundamentalHz(x: Float64Array, sampleRateHz: number, name
     const whole = Math.floor(cycles);
     // A record just short of two estimated cycles still gets a refinement step; the caller then
     // rejects it if it really holds fewer than two.
-    const segmentCycles = whole >= 2 ? Math.floor(whole / 2) : cycles / 2;
+    const segmentCycles = whole >= 2 ? Math.min(MAX_SEGMENT_CYCLES, Math.floor(whole / 2)) : cycles / 2;
     const shiftCycles = whole >= 2 ? whole - segmentCycles : cycles / 2;
     const samplesPerCycle = sampleRateHz / frequencyHz;
     const omega = (2 * Math.PI) / samplesPerCycle;
     const phaseAt = (startCycles: number): [number, number] => {
       const span = hannSpan(startCycles * samplesPerCycle, segmentCycles * samplesPerCycle, x.length);
-      const { re, im } = harmonicPhasors(weightedSamples(x, span, meanV), span, omega, 1);
+      const { re, im } = harmonicPhasors(x, span, meanV, omega, 1);
       return [re[1], im[1]];
     };
     const [earlyRe, earlyIm] = phaseAt(0);

@@ -54,18 +54,6 @@ export function hannSpan(startSample: number, spanSamples: number, recordLength:
   return { first, weights, weightSum };
 }
 
-/**
- * The samples inside the span less a DC estimate, each multiplied by its Hann weight. The
- * window rejects DC exactly only in the continuous limit; removing it first leaves nothing for
- * the sampled sums to leak, however large the offset.
- */
-export function weightedSamples(x: Float64Array, span: HannSpan, dcV: number): Float64Array {
-  const { first, weights } = span;
-  const weighted = new Float64Array(weights.length);
-  for (let i = 0; i < weights.length; i++) weighted[i] = (x[first + i] - dcV) * weights[i];
-  return weighted;
-}
-
 /** Levels of one signal over the span. */
 export interface SpanLevels {
   dcV: number;

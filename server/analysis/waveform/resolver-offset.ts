@@ -2,7 +2,7 @@ import { DEG_PER_RAD, wrapDegrees180 } from './angles.js';
 import { measureFundamentalHz, wholeCyclesIn } from './fundamental-frequency.js';
 import { requirePositive, requirePositiveInteger, requireSameLength, toFiniteSamples, type Samples } from './validate.js';
 import { harmonicPhasors } from './goertzel.js';
-import { hannSpan, spanLevels, weightedSamples } from './hann-span.js';
+import { hannSpan, spanLevels } from './hann-span.js';
 
 export interface ResolverOffsetInput {
   sampleRateHz: number;
@@ -66,7 +66,7 @@ export function resolverOffset(input: ResolverOffsetInput): ResolverOffset {
   requireMatchingSpeed(resolverDeg, ratio, omega);
 
   const span = hannSpan(0, (cycles * 2 * Math.PI) / omega, uv.length);
-  const fundamental = harmonicPhasors(weightedSamples(uv, span, spanLevels(uv, span).dcV), span, omega, 1);
+  const fundamental = harmonicPhasors(uv, span, spanLevels(uv, span).dcV, omega, 1);
   // uv = A·cos(ω·n + φc) = A·sin(ω·n + φc + 90°) and uv ∝ sin(θ + 30°), so θ(n) = ω·n + φc + 60°.
   const thetaAtZeroDeg = Math.atan2(fundamental.im[1], fundamental.re[1]) * DEG_PER_RAD + 60;
   const degPerSample = omega * DEG_PER_RAD;

@@ -1,4 +1,5 @@
 import FFT from 'fft.js';
+import { hannSpan } from './hann-span.js';
 
 /**
  * Coarse location of the fundamental: the largest peak of a Hann-windowed FFT. It only has to
@@ -42,10 +43,9 @@ export function coarseSpectrumPeakHz(x: Float64Array, sampleRateHz: number, name
   }
   let fftSize = 2;
   while (fftSize < points) fftSize *= 2;
+  const { weights } = hannSpan(0, points, points);
   const windowed = new Float64Array(fftSize);
-  for (let i = 0; i < points; i++) {
-    windowed[i] = (decimated[i] - mean) * (0.5 - 0.5 * Math.cos((2 * Math.PI * i) / points));
-  }
+  for (let i = 0; i < points; i++) windowed[i] = (decimated[i] - mean) * weights[i];
   let fft = fftBySize.get(fftSize);
   if (!fft) {
     fft = new FFT(fftSize);
