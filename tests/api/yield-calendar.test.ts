@@ -67,7 +67,7 @@ describe('Plant shift calendar and time zone of the yield board', () => {
     const before = (await admin.get(calendarPath).expect(200)).body;
     const cases: Array<[object, string]> = [
       [{ timeZone: 'Mars/Olympus_Mons' }, 'timeZone'],
-      [{ shifts: [{ code: 'early', name: 'Early', startsAt: '06:10' }] }, 'shifts[0].startsAt'],
+      [{ shifts: [{ code: 'early', name: 'Early', startsAt: '24:00' }] }, 'shifts[0].startsAt'],
       [{ shifts: [threeShifts[0], { ...threeShifts[1], code: 'early' }] }, 'shifts[1].code'],
       [{ firstPassTarget: 1.2 }, 'firstPassTarget'],
     ];

@@ -4,8 +4,9 @@ import { invalid } from '../../errors.js';
 import { recordAudit, type Actor } from '../audit/record-audit.js';
 import { isKnownTimeZone } from './plant-time.js';
 import { readShiftCalendar, type ShiftCalendar } from './shift-calendar.js';
+import { refileYieldRollups } from './recompute-shift-slots.js';
 
-const clock = z.string().regex(/^([01]\d|2[0-3]):(00|15|30|45)$/, 'must be HH:MM on a quarter hour, e.g. 06:00');
+const clock = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'must be HH:MM from 00:00 to 23:59, e.g. 06:00');
 
 export const shiftCalendarBodySchema = z.strictObject({
   timeZone: z.string().trim().min(1).max(64).refine(isKnownTimeZone, 'must be an IANA time zone such as Europe/Berlin or UTC'),
@@ -28,8 +29,8 @@ export function presentCalendar(calendar: ShiftCalendar) {
 }
 
 /**
- * Replaces the plant's shifts, time zone and first-pass target in one audited step. The yield
- * rollups store UTC buckets only, so past motors fall into the new shifts without a rewrite.
+ * Replaces the plant's shifts, time zone and first-pass target in one audited step, and refiles
+ * the motors already counted under the new days and shifts in the same transaction.
  */
 export async function changeShiftCalendar(db: Knex, body: ShiftCalendarBody, actor: Actor, now = new Date()) {
   const codes = body.shifts.map((s) => s.code);
@@ -46,7 +47,9 @@ export async function changeShiftCalendar(db: Knex, body: ShiftCalendarBody, act
     await trx('yield_settings')
       .insert({ id: 1, time_zone: body.timeZone, first_pass_target: body.firstPassTarget, updated_by: actor.name, updated_at: now })
       .onConflict('id').merge();
-    const after = presentCalendar(await readShiftCalendar(trx));
+    const calendar = await readShiftCalendar(trx);
+    await refileYieldRollups(trx, calendar);
+    const after = presentCalendar(calendar);
     await recordAudit(trx, { actor, action: 'shift_calendar.changed', entityType: 'shift_calendar', entityId: 'plant', before, after, reason: body.reason, at: now });
     return after;
   });

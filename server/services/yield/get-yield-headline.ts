@@ -1,8 +1,8 @@
 import type { Knex } from 'knex';
 import { isoWeekOf, mondayOfIsoWeek } from './plant-time.js';
-import { productionDayAt, readShiftCalendar } from './shift-calendar.js';
-import { resolveYieldFilter, whereFilter, type ResolvedFilter } from './yield-filter.js';
-import { withYields, type YieldGroup } from './yield-groups.js';
+import { readShiftCalendar, slotOf } from './shift-calendar.js';
+import { resolveYieldFilter, type ResolvedFilter } from './yield-filter.js';
+import { countQuery, withYields, type YieldGroup } from './yield-groups.js';
 
 export type YieldHeadline = {
   today: YieldGroup; week: YieldGroup; motorsOnHold: number; openSignals: number | null;
@@ -10,8 +10,7 @@ export type YieldHeadline = {
 };
 
 async function totalsOf(db: Knex, key: string, filter: ResolvedFilter): Promise<YieldGroup> {
-  const row = await whereFilter(db('yield_motors as y'), filter, 'y')
-    .count({ tested: '*' }).sum({ passed_first: 'y.first_pass', passed_final: 'y.final_pass' }).first();
+  const [row] = await countQuery(db, filter, []);
   return withYields(key, { tested: Number(row?.tested ?? 0), passedFirst: Number(row?.passed_first ?? 0), passedFinal: Number(row?.passed_final ?? 0) });
 }
 
@@ -38,7 +37,7 @@ async function countOpenSignals(db: Knex, filter: ResolvedFilter): Promise<numbe
  */
 export async function getYieldHeadline(db: Knex, input: { product?: string; line?: string }, now = new Date()): Promise<YieldHeadline> {
   const calendar = await readShiftCalendar(db);
-  const today = productionDayAt(calendar, now);
+  const today = slotOf(calendar, now).day;
   const monday = mondayOfIsoWeek(isoWeekOf(today)) ?? today;
   const [todayFilter, weekFilter] = await Promise.all([
     resolveYieldFilter(db, calendar, { ...input, from: today, to: today }, now),

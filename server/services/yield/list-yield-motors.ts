@@ -2,7 +2,7 @@ import type { Knex } from 'knex';
 import { z } from 'zod';
 import { invalid } from '../../errors.js';
 import { addDays, mondayOfIsoWeek } from './plant-time.js';
-import { productionDaysRange, readShiftCalendar, shiftRange } from './shift-calendar.js';
+import { readShiftCalendar, type ShiftCalendar } from './shift-calendar.js';
 import { resolveYieldFilter, whereFilter, yieldFilterFields, yieldGroupings, type ResolvedFilter } from './yield-filter.js';
 
 export const yieldMotorsQuerySchema = z.strictObject({
@@ -23,21 +23,23 @@ export type YieldMotor = {
 
 const badKey = (message: string) => invalid([{ field: 'key', message }]);
 
-/** Narrows the time range to one day, week or shift named by a group key. */
-function timeRangeOfKey(calendar: Awaited<ReturnType<typeof readShiftCalendar>>, groupBy: 'day' | 'week' | 'shift', key: string) {
+type Days = { fromDay: string; toDay: string; shift?: string };
+const isDay = (text: string) => /^\d{4}-\d{2}-\d{2}$/.test(text) && !Number.isNaN(Date.parse(text));
+
+/** The production days (and shift) that a time group key names. */
+function daysOfKey(calendar: ShiftCalendar, groupBy: 'day' | 'week' | 'shift', key: string): Days {
   if (groupBy === 'day') {
-    if (!/^\d{4}-\d{2}-\d{2}$/.test(key)) throw badKey('must be a production day YYYY-MM-DD');
-    return productionDaysRange(calendar, key, key);
+    if (!isDay(key)) throw badKey('must be a production day YYYY-MM-DD');
+    return { fromDay: key, toDay: key };
   }
   if (groupBy === 'week') {
     const monday = mondayOfIsoWeek(key);
     if (!monday) throw badKey('must be an ISO week such as 2026-W49');
-    return productionDaysRange(calendar, monday, addDays(monday, 6));
+    return { fromDay: monday, toDay: addDays(monday, 6) };
   }
   const [day, code] = key.split('/');
-  const range = /^\d{4}-\d{2}-\d{2}$/.test(day) && code ? shiftRange(calendar, day, code) : null;
-  if (!range) throw badKey('must be a production day and a shift code, such as 2026-12-01/night');
-  return range;
+  if (!isDay(day) || !calendar.shifts.some((s) => s.code === code)) throw badKey('must be a production day and a shift code, such as 2026-12-01/night');
+  return { fromDay: day, toDay: day, shift: code };
 }
 
 /** The motors behind one bar of the board: a group, a failing characteristic, or both. */
@@ -47,8 +49,9 @@ export async function listYieldMotors(db: Knex, query: YieldMotorsQuery, now = n
   const byColumn = groupBy && key && !['day', 'week', 'shift'].includes(groupBy) ? { [groupBy]: key } : {};
   let filter: ResolvedFilter = await resolveYieldFilter(db, calendar, { ...query, ...byColumn }, now);
   if ((groupBy === 'day' || groupBy === 'week' || groupBy === 'shift') && key) {
-    const range = timeRangeOfKey(calendar, groupBy, key);
-    filter = { ...filter, fromQuarter: Math.max(filter.fromQuarter, range.fromQuarter), toQuarter: Math.min(filter.toQuarter, range.toQuarter) };
+    const days = daysOfKey(calendar, groupBy, key);
+    // Both ranges hold: a bar outside the board's dates has no motors.
+    filter = { ...filter, fromDay: days.fromDay > filter.fromDay ? days.fromDay : filter.fromDay, toDay: days.toDay < filter.toDay ? days.toDay : filter.toDay, shift: days.shift };
   }
   const base = whereFilter(db('yield_motors as y'), filter, 'y');
   if (query.outcome === 'failed-first') base.where('y.first_pass', false);

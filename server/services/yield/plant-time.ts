@@ -39,22 +39,29 @@ export function utcOfPlantTime(timeZone: string, isoDate: string, minute: number
   return wallMs - offsetMinutes(timeZone, guess) * 60_000;
 }
 
+/** A stretch of time from `fromMs` on during which the plant's clock runs `offset` minutes ahead of UTC. */
+export type OffsetSpan = { fromMs: number; offset: number };
+
 /**
- * Offsets for many instants, cheaply: a UTC day whose two ends share an offset has it throughout
- * (a zone changes at most once a day), so Intl is asked about twice per day instead of per instant.
+ * The zone's offsets between two instants, as spans starting at each change. A UTC day whose two
+ * ends share an offset has it throughout (a zone changes at most once a day), so Intl is asked
+ * about twice per day, and per quarter hour only on the days of a change.
  */
-export function offsetReader(timeZone: string): (utcMs: number) => number {
-  const byDay = new Map<number, number | null>();
-  return (utcMs) => {
-    const day = Math.floor(utcMs / 86_400_000);
-    let known = byDay.get(day);
-    if (known === undefined) {
-      const start = offsetMinutes(timeZone, day * 86_400_000);
-      known = start === offsetMinutes(timeZone, (day + 1) * 86_400_000) ? start : null;
-      byDay.set(day, known);
+export function offsetSpans(timeZone: string, fromMs: number, toMs: number): OffsetSpan[] {
+  const dayMs = 86_400_000;
+  const spans: OffsetSpan[] = [{ fromMs, offset: offsetMinutes(timeZone, fromMs) }];
+  for (let day = Math.floor(fromMs / dayMs) * dayMs; day < toMs; day += dayMs) {
+    let current = spans[spans.length - 1].offset;
+    if (offsetMinutes(timeZone, day + dayMs) === current) continue;
+    for (let at = Math.max(day, fromMs); at <= day + dayMs; at += 15 * 60_000) {
+      const offset = offsetMinutes(timeZone, at);
+      if (offset !== current) {
+        spans.push({ fromMs: at, offset });
+        current = offset;
+      }
     }
-    return known ?? offsetMinutes(timeZone, utcMs);
-  };
+  }
+  return spans;
 }
 
 /** "2026-12-01" plus whole days. */

@@ -2,7 +2,7 @@ import type { Knex } from 'knex';
 import { z } from 'zod';
 import { invalid, type FieldError } from '../../errors.js';
 import { addDays } from './plant-time.js';
-import { productionDayAt, productionDaysRange, type ShiftCalendar } from './shift-calendar.js';
+import { slotOf, type ShiftCalendar } from './shift-calendar.js';
 
 export const yieldGroupings = ['day', 'week', 'shift', 'line', 'station', 'product', 'lot'] as const;
 export type YieldGrouping = (typeof yieldGroupings)[number];
@@ -27,16 +27,16 @@ export const yieldQuerySchema = z.strictObject({
 
 export type YieldFilterInput = { from?: string; to?: string; product?: string; line?: string; station?: string; lot?: string };
 
-/** A filter resolved to the rollups' ids and quarter-hour range. */
+/** A filter resolved to the rollups' ids and production days (and a shift, for a drill-down). */
 export type ResolvedFilter = {
-  fromDay: string; toDay: string; fromQuarter: number; toQuarter: number;
+  fromDay: string; toDay: string; shift?: string;
   productId?: number; line?: string; stationId?: number; lotId?: number;
 };
 
 const maxDays = 400;
 
 export async function resolveYieldFilter(db: Knex, calendar: ShiftCalendar, input: YieldFilterInput, now: Date): Promise<ResolvedFilter> {
-  const toDay = input.to ?? productionDayAt(calendar, now);
+  const toDay = input.to ?? slotOf(calendar, now).day;
   const fromDay = input.from ?? addDays(toDay, -29);
   const fields: FieldError[] = [];
   if (fromDay > toDay) fields.push({ field: 'from', message: 'must not be after to' });
@@ -51,14 +51,15 @@ export async function resolveYieldFilter(db: Knex, calendar: ShiftCalendar, inpu
   if (input.lot && !lot) fields.push({ field: 'lot', message: `lot ${input.lot} is not known` });
   if (fields.length > 0) throw invalid(fields);
   return {
-    fromDay, toDay, ...productionDaysRange(calendar, fromDay, toDay),
+    fromDay, toDay,
     productId: product?.id, line: input.line, stationId: station?.id, lotId: lot?.id,
   };
 }
 
 /** Applies a resolved filter to a query over a rollup table aliased `alias`. */
 export function whereFilter<Q extends Knex.QueryBuilder>(query: Q, filter: ResolvedFilter, alias: string): Q {
-  query.where(`${alias}.first_quarter`, '>=', filter.fromQuarter).where(`${alias}.first_quarter`, '<', filter.toQuarter);
+  query.whereBetween(`${alias}.shift_day`, [filter.fromDay, filter.toDay]);
+  if (filter.shift !== undefined) query.where(`${alias}.shift_code`, filter.shift);
   if (filter.productId !== undefined) query.where(`${alias}.product_id`, filter.productId);
   if (filter.line !== undefined) query.where(`${alias}.line`, filter.line);
   if (filter.stationId !== undefined) query.where(`${alias}.station_id`, filter.stationId);

@@ -26,7 +26,8 @@ export default function BoardChart({ option, height, onPick }: BoardChartProps) 
   return (
     <ReactEChartsCore
       echarts={echarts}
-      option={option}
+      // No animation: a board that refreshes every minute should not redraw itself from zero.
+      option={{ animation: false, ...option }}
       notMerge
       style={{ height, width: '100%', cursor: 'pointer' }}
       onEvents={{ click: (event: { dataIndex: number }) => onPick(event.dataIndex) }}
