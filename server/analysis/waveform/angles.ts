@@ -18,6 +18,7 @@ export function wrapDegrees360(angleDeg: number): number {
   return wrapped >= 360 ? wrapped - 360 : wrapped;
 }
 
+/** Degrees in one radian. */
 export const DEG_PER_RAD = 180 / Math.PI;
 
 function requireFiniteAngle(angleDeg: number): void {

@@ -14,6 +14,7 @@ export interface PerLine<T> {
   wu: T;
 }
 
+/** One open-circuit spin: line-to-line voltages in volts, sampled together at sampleRateHz. */
 export interface BackEmfInput {
   sampleRateHz: number;
   speedRpm: number;
@@ -22,6 +23,7 @@ export interface BackEmfInput {
   lineToLineV: PerLine<Samples>;
 }
 
+/** Results of analyzeBackEmf; units are in the names, harmonics keyed by order 2…25. */
 export interface BackEmfAnalysis {
   electricalHz: number;
   polePairsFromFrequency: number;

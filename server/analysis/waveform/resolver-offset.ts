@@ -4,6 +4,7 @@ import { requirePositive, requirePositiveInteger, requireSameLength, toFiniteSam
 import { harmonicPhasors } from './goertzel.js';
 import { hannSpan, spanLevels } from './hann-span.js';
 
+/** The uv back-EMF in volts and the R/D converter's angle, sampled together at sampleRateHz. */
 export interface ResolverOffsetInput {
   sampleRateHz: number;
   polePairs: number;
@@ -12,6 +13,7 @@ export interface ResolverOffsetInput {
   resolverAngleDeg: Samples;
 }
 
+/** Offset and its peak-to-peak spread, in motor electrical degrees (see resolverOffset). */
 export interface ResolverOffset {
   offsetDeg: number;
   spreadDeg: number;

@@ -6,6 +6,7 @@
 /** Samples as a test stand sends them: a plain array or a typed array of volts or degrees. */
 export type Samples = readonly number[] | Float64Array;
 
+/** A finite number above zero, or an Error naming the argument. */
 export function requirePositive(name: string, value: number): number {
   if (typeof value !== 'number' || !Number.isFinite(value) || value <= 0) {
     throw new Error(`${name} must be a finite number greater than zero, got ${String(value)}`);
@@ -13,6 +14,7 @@ export function requirePositive(name: string, value: number): number {
   return value;
 }
 
+/** A whole number above zero, or an Error naming the argument. */
 export function requirePositiveInteger(name: string, value: number): number {
   requirePositive(name, value);
   if (!Number.isInteger(value)) throw new Error(`${name} must be a whole number, got ${value}`);

@@ -59,12 +59,14 @@ function spin(spec: SpinSpec) {
 
 describe('resolverOffset', () => {
   it('when the resolver reads 37.5° ahead of θ with a 1-pole-pair resolver on 4 pole pairs, then the offset is +37.5°', () => {
+    // Reference: the offset built into spin(); motor electrical = resolver × 4/1 (DOMAIN resolver section)
     const result = resolverOffset(spin({ offsetDeg: 37.5 }));
     expect(result.offsetDeg).toBeCloseTo(37.5, 6);
     expect(result.spreadDeg).toBeLessThan(1e-6);
   });
 
   it('when the resolver has as many pole pairs as the motor, then −170° is found', () => {
+    // ratio 4/4 = 1: the resolver angle is the motor electrical angle (DOMAIN resolver section)
     const result = resolverOffset(spin({ offsetDeg: -170, resolverPolePairs: 4 }));
     expect(result.offsetDeg).toBeCloseTo(-170, 6);
   });
@@ -93,8 +95,9 @@ describe('resolverOffset', () => {
     expect(result.offsetDeg).toBeCloseTo(37.5, 2);
   });
 
-  it('when the EMF carries 5th and 7th harmonics, then the offset is unchanged', () => {
-    // line-to-neutral 5th and 7th do not cancel in uv, unlike the 3rd (common practice)
+  it('when the EMF carries 3rd, 5th and 7th harmonics, then the offset is unchanged', () => {
+    // line-to-neutral 5th and 7th do not cancel in uv, unlike the 3rd (DOMAIN, common practice);
+    // the fundamental's phase is what defines θ, so they must not move it
     const result = resolverOffset(spin({ offsetDeg: 12.25, harmonicsPercent: { 3: 4, 5: 3, 7: 1.5 } }));
     expect(result.offsetDeg).toBeCloseTo(12.25, 6);
   });
