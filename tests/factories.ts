@@ -85,6 +85,7 @@ export async function createStation(db: Knex, overrides: { code?: string; line?:
   const [id] = await db('stations').insert({ code, line, kind: 'eol-pmsm', name: `End-of-line stand ${code}`, calibration_due: due });
   const clientId = overrides.clientId === undefined ? 'demo-station' : overrides.clientId;
   if (clientId) await db('station_clients').insert({ client_id: clientId, station_id: id });
+  forgetReferenceData();
   return { id: Number(id), code, line, clientId };
 }
 

@@ -5,7 +5,7 @@ import { statusAfterRun } from '../motors/refresh-motor-status.js';
 import { placeHold } from '../holds/place-hold.js';
 import { loadLot, loadProduct } from './reference-data.js';
 import { limitsInForce } from './limits-in-force.js';
-import { stationByCode, stationOfClient, type StationRef } from './station-of-client.js';
+import { cachedStationOfClient, stationByCode, type StationRef } from './station-of-client.js';
 import { checkSerialAndLot, checkTimes } from './check-run-document.js';
 import { checkResults, judgeRun, type LabelledResult } from './judge-run.js';
 import { deriveCharacteristics } from './derive-characteristics.js';
@@ -33,12 +33,12 @@ export type IngestOptions = {
 export async function ingestTestRun(db: Knex, document: TestRunDocument, options: IngestOptions = {}): Promise<IngestOutcome> {
   const now = options.now ?? new Date();
   const sha256 = bodySha256(document);
-  // Independent reads in parallel: ingest latency is mostly round trips.
-  const [station, product, lot, limitSet, retried] = await Promise.all([
+  // Independent reads in parallel: ingest latency is mostly round trips. A retry is not looked
+  // for here: it passes the same checks and is caught by the unique runId when stored.
+  const [station, product, lot, limitSet] = await Promise.all([
     findStation(db, document, options.clientId), loadProduct(db, document.product), loadLot(db, document.lot),
-    limitsInForce(db, { code: document.product }, new Date(document.startedAt)), answerForRetry(db, document.runId, sha256),
+    limitsInForce(db, { code: document.product }, new Date(document.startedAt)),
   ]);
-  if (retried) return retried;
 
   const fields: FieldError[] = [...checkTimes(document, now)];
   if (!station) fields.push({ field: 'station', message: `station ${document.station} is not known` });
@@ -61,7 +61,7 @@ export async function ingestTestRun(db: Knex, document: TestRunDocument, options
       return { status: 201, body: await db.transaction((trx) => storeRun(trx, run, now)) };
     } catch (error) {
       if (!isRetryable(error)) throw error;
-      // Another request stored this runId (a concurrent retry) or created this serial first.
+      // This runId is stored already (a retry, perhaps concurrent), or a deadlock between two first runs.
       const answer = await answerForRetry(db, document.runId, sha256);
       if (answer) return answer;
       if (attempt >= 3) throw error;
@@ -71,7 +71,7 @@ export async function ingestTestRun(db: Knex, document: TestRunDocument, options
 
 async function findStation(db: Knex, document: TestRunDocument, clientId: string | undefined): Promise<StationRef | null> {
   if (clientId === undefined) return stationByCode(db, document.station);
-  const bound = await stationOfClient(db, clientId);
+  const bound = await cachedStationOfClient(db, clientId);
   if (!bound) throw notFound(`Client ${clientId} is bound to no station; an admin binds it in Setup.`);
   if (bound.code !== document.station) {
     throw new AppError(403, 'station_mismatch', `This client posts for station ${bound.code}, not ${document.station}.`, [{ field: 'station', message: `must be ${bound.code}, the station bound to this client` }]);
@@ -124,21 +124,31 @@ async function storeRun(trx: Knex.Transaction, run: RunToStore, now: Date): Prom
   return response;
 }
 
-/** The motor row, locked so that concurrent runs of one serial count attempts one after the other. */
+/**
+ * The motor row, locked so that concurrent runs of one serial count attempts one after the other.
+ * Most runs are a serial's first, so the insert comes first: one statement instead of two. A
+ * duplicate serial fails only that statement, and the existing row is then locked and read.
+ */
 async function lockOrCreateMotor(trx: Knex.Transaction, run: RunToStore, now: Date): Promise<{ id: number; attempts: number }> {
   const { serial } = run.document;
-  const existing = await trx('motors').where({ serial }).forUpdate().first('id', 'product_id', 'lot_id', 'attempts');
-  if (!existing) {
+  try {
     const [id] = await trx('motors').insert({ serial, product_id: run.productId, lot_id: run.lotId, status: 'not tested', attempts: 0, created_at: now });
     return { id: Number(id), attempts: 0 };
+  } catch (error) {
+    if (errorCode(error) !== 'ER_DUP_ENTRY') throw error;
   }
+  const existing = await trx('motors').where({ serial }).forUpdate().first('id', 'product_id', 'lot_id', 'attempts');
   if (existing.product_id !== run.productId) throw invalid([{ field: 'serial', message: `serial ${serial} was built as another product` }]);
   if (existing.lot_id !== run.lotId) throw invalid([{ field: 'lot', message: `serial ${serial} belongs to another lot` }]);
   return existing;
 }
 
-/** A unique key taken by a concurrent request, or a deadlock between two first runs of new serials. */
+function errorCode(error: unknown): string | undefined {
+  return typeof error === 'object' && error !== null ? (error as { code?: string }).code : undefined;
+}
+
+/** The runId taken (by an earlier or concurrent post), or a deadlock between two runs of one serial. */
 function isRetryable(error: unknown): boolean {
-  const code = typeof error === 'object' && error !== null ? (error as { code?: string }).code : undefined;
+  const code = errorCode(error);
   return code === 'ER_DUP_ENTRY' || code === 'ER_LOCK_DEADLOCK';
 }

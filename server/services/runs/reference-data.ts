@@ -1,12 +1,13 @@
 import type { Knex } from 'knex';
+import { forgetStations } from './station-of-client.js';
 
 /**
  * Per-process cache of what every ingest reads but rarely changes: products with their
  * characteristics, lots, and the limits of approved limit sets. Approved limits never change
  * (a change is a new revision), so they are kept until forgotten; products and lots expire after
  * a short time so that another app process's changes are seen soon. Services that change
- * products, characteristics or lots call forgetReferenceData() in their own process.
- * Which limit set is in force and a station's calibration are always read fresh.
+ * products, characteristics, lots or stations call forgetReferenceData() in their own process.
+ * Which limit set is in force is always read fresh; stations are cached for seconds only.
  */
 const productTtlMs = 10_000;
 
@@ -25,6 +26,7 @@ const lots = new Map<string, { value: LotRef; expiresAtMs: number }>();
 const limitsBySet = new Map<number, Map<number, LimitRow>>();
 
 export function forgetReferenceData(): void {
+  forgetStations();
   products.clear();
   lots.clear();
   limitsBySet.clear();

@@ -1,5 +1,12 @@
 import type { Knex } from 'knex';
 
+const stationTtlMs = 5_000;
+const stationsByClient = new Map<string, { value: StationRef; expiresAtMs: number }>();
+
+export function forgetStations(): void {
+  stationsByClient.clear();
+}
+
 export type StationRef = { id: number; code: string; line: string; kind: string; name: string; calibrationDue: string };
 
 const columns = ['stations.id', 'stations.code', 'stations.line', 'stations.kind', 'stations.name', 'stations.calibration_due'];
@@ -14,6 +21,19 @@ export async function stationOfClient(db: Knex, clientId: string): Promise<Stati
   const row = await db('station_clients').join('stations', 'stations.id', 'station_clients.station_id')
     .where('station_clients.client_id', clientId).first(columns);
   return row ? toStation(row) : null;
+}
+
+/**
+ * The same, cached per process for a few seconds for ingest (stations post many runs a minute).
+ * A new calibration date therefore reaches ingest within stationTtlMs; Setup changes in this
+ * process call forgetReferenceData(), which clears this cache too.
+ */
+export async function cachedStationOfClient(db: Knex, clientId: string): Promise<StationRef | null> {
+  const cached = stationsByClient.get(clientId);
+  if (cached && cached.expiresAtMs > Date.now()) return cached.value;
+  const value = await stationOfClient(db, clientId);
+  if (value) stationsByClient.set(clientId, { value, expiresAtMs: Date.now() + stationTtlMs });
+  return value;
 }
 
 export async function stationByCode(db: Knex, code: string): Promise<StationRef | null> {
