@@ -47,7 +47,7 @@ export default function MotorRecordRoute() {
         {record.runs.length === 0 ? (
           <p className="text-sm text-graphite-500">Not tested yet.</p>
         ) : (
-          record.runs.map((run, index) => <RunDetails key={run.runId} run={run} open={index === 0} />)
+          record.runs.map((run, index) => <RunDetails key={run.runId} serial={record.serial} run={run} open={index === 0} />)
         )}
       </Part>
       <Part title="Rework notes">

@@ -39,6 +39,8 @@ export const runSchema = z.object({
   calibrationDue: z.string(),
   results: z.array(measurementSchema),
   waveforms: z.array(waveformSchema).default([]),
+  /** Raw readings as the stand posted them (insulation, hipot, winding resistance). */
+  readings: z.array(z.object({ kind: z.string(), reading: z.unknown() })).default([]),
 });
 export type TestRun = z.infer<typeof runSchema>;
 

@@ -1,40 +1,31 @@
-import { formatNumber } from '../../../lib/format';
-import type { Waveform } from '../api/motor-schemas';
-
-type SummaryRow = { key: string; value: string };
-
-const summaryRows = (summary: unknown): SummaryRow[] => {
-  if (summary === null || typeof summary !== 'object' || Array.isArray(summary)) return [];
-  return Object.entries(summary).map(([key, value]) => ({
-    key,
-    value: typeof value === 'number' ? formatNumber(value, { maxDigits: 4 }) : typeof value === 'string' ? value : JSON.stringify(value),
-  }));
-};
+import type { TestRun } from '../api/motor-schemas';
+import {
+  backEmfSummarySchema, hipotReadingSchema, insulationReadingSchema, readingOf, windingResistanceReadingSchema,
+} from '../api/raw-data-schemas';
+import { BackEmfPanel } from './BackEmfPanel';
+import { HighVoltageReadings } from './HighVoltageReadings';
+import { ResolverOffsetPanel } from './ResolverOffsetPanel';
+import { WindingResistancePanel } from './WindingResistancePanel';
 
 /**
- * The waveforms a run recorded, for now as the server's computed summary per waveform.
- * Slot for the analysis work: the back-EMF chart goes in this component.
+ * What a run's raw data shows beyond its results table: the back-EMF spin (traces, spectrum and
+ * figures), the resolver offset, insulation and hipot with the high-voltage caution, and the
+ * phase resistances. Each part appears only when the stand sent that raw data.
  */
-export function WaveformPanel({ waveforms }: { waveforms: Waveform[] }) {
-  if (waveforms.length === 0) return null;
+export function WaveformPanel({ serial, run }: { serial: string; run: TestRun }) {
+  const backEmf = run.waveforms.find((w) => w.kind === 'back-emf');
+  const summary = backEmf ? backEmfSummarySchema.safeParse(backEmf.summary) : undefined;
+  const insulation = readingOf(run.readings, 'insulation', insulationReadingSchema);
+  const hipot = readingOf(run.readings, 'hipot', hipotReadingSchema);
+  const windings = readingOf(run.readings, 'winding-resistance', windingResistanceReadingSchema);
+  if (!summary?.success && !insulation && !hipot && !windings) return null;
   return (
-    <section aria-label="Waveforms" className="space-y-3">
-      <h4 className="text-sm font-semibold uppercase tracking-wider text-graphite-600">Waveforms</h4>
-      {waveforms.map((waveform, index) => (
-        <table key={`${waveform.kind}-${index}`} className="w-full max-w-xl text-sm">
-          <caption className="pb-1 text-left font-medium text-graphite-800">{waveform.kind}</caption>
-          <tbody className="divide-y divide-paper-200">
-            {summaryRows(waveform.summary).map((row) => (
-              <tr key={row.key}>
-                <th scope="row" className="py-1 pr-4 text-left font-normal text-graphite-600">
-                  {row.key}
-                </th>
-                <td className="figures py-1 text-right text-graphite-950">{row.value}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      ))}
+    <section aria-label="Waveforms and raw readings" className="space-y-5 rounded-md border border-paper-200 bg-paper-50 p-4">
+      <h4 className="text-sm font-semibold uppercase tracking-wider text-graphite-600">Waveforms and raw readings</h4>
+      {summary?.success ? <BackEmfPanel serial={serial} runId={run.runId} summary={summary.data} results={run.results} /> : null}
+      {summary?.success && summary.data.resolver ? <ResolverOffsetPanel resolver={summary.data.resolver} results={run.results} /> : null}
+      {windings ? <WindingResistancePanel reading={windings} results={run.results} /> : null}
+      <HighVoltageReadings insulation={insulation} hipot={hipot} results={run.results} />
     </section>
   );
 }

@@ -16,7 +16,7 @@ function Fact({ label, children }: { label: string; children: ReactNode }) {
 }
 
 /** One run, collapsible: its summary line always shows; the measurements open on demand. */
-export function RunDetails({ run, open }: { run: TestRun; open: boolean }) {
+export function RunDetails({ serial, run, open }: { serial: string; run: TestRun; open: boolean }) {
   const failedSteps = run.results.filter((result) => result.verdict === 'fail').length;
   return (
     <details open={open} className="group rounded-lg border border-paper-300 bg-white">
@@ -61,7 +61,7 @@ export function RunDetails({ run, open }: { run: TestRun; open: boolean }) {
           </Fact>
         </dl>
         <MeasurementTable results={run.results} />
-        <WaveformPanel waveforms={run.waveforms} />
+        <WaveformPanel serial={serial} run={run} />
       </div>
     </details>
   );
