@@ -1,0 +1,78 @@
+import { randomUUID } from 'node:crypto';
+import { benchCharacteristicCode, benchProductCode, type BenchDataset } from './dataset.js';
+import { clientToken, type BenchContext } from './harness.js';
+import { percentile, round, runPool } from './stats.js';
+
+const runsPerMeasurement = 2000;
+const concurrentStations = 16;
+
+function runDocument(serial: string, stationCode: string, lotCode: string, startedAt: Date) {
+  return {
+    runId: randomUUID(), serial, product: benchProductCode, station: stationCode, lot: lotCode,
+    startedAt: startedAt.toISOString(), finishedAt: new Date(startedAt.getTime() + 1000).toISOString(),
+    operatorBadge: 'B-0002', programVersion: 'bench-1',
+    results: Array.from({ length: 40 }, (_, i) => ({ characteristic: benchCharacteristicCode(i), value: 100 + ((i * 7) % 9) - 4, unit: 'V' })),
+  };
+}
+
+/** API ingest (HTTP, 16 concurrent) beside the raw ceiling (knex, 40 rows per transaction, 16 connections). */
+export async function benchIngest(ctx: BenchContext, dataset: BenchDataset, tag: string) {
+  const station = await ctx.db('stations').where({ id: dataset.stationIds[0] }).first();
+  await ctx.db('station_clients').insert({ client_id: 'demo-station', station_id: station.id }).onConflict('client_id').merge();
+  const lot = await ctx.db('lots').where({ product_id: dataset.productId }).orderBy('id', 'desc').first();
+  const token = await clientToken(ctx.idpUrl, 'demo-station', 'demo-station-secret', 'test-runs:write');
+  const readToken = await clientToken(ctx.idpUrl, 'demo-integration', 'demo-integration-secret', 'records:read');
+  const base = Date.now() - 3_600_000;
+  const post = async (i: number, prefix: string) => {
+    const document = runDocument(`BX${prefix}-${String(i).padStart(5, '0')}`, station.code, lot.code, new Date(base + i));
+    const response = await fetch(`${ctx.app.url}/api/v1/test-runs`, {
+      method: 'POST', headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' }, body: JSON.stringify(document),
+    });
+    if (response.status !== 201) throw new Error(`ingest answered ${response.status}: ${await response.text()}`);
+  };
+
+  ctx.log(`ingest: ${runsPerMeasurement} runs through the API, ${concurrentStations} concurrent…`);
+  let start = performance.now();
+  await runPool(runsPerMeasurement, concurrentStations, (i) => post(i, `${tag}0`));
+  const apiRunsPerS = runsPerMeasurement / ((performance.now() - start) / 1000);
+
+  ctx.log('ingest: the same rows through knex directly (raw ceiling)…');
+  const motorIds = (await ctx.db('motors').where({ lot_id: lot.id }).select('id').limit(runsPerMeasurement)).map((m) => m.id);
+  const maxAttempt = await ctx.db('test_runs').where({ lot_id: lot.id }).max({ n: 'attempt' }).first();
+  const attemptBase = Number(maxAttempt?.n ?? 0) + 1;
+  start = performance.now();
+  await runPool(runsPerMeasurement, concurrentStations, async (i) => {
+    await ctx.db.transaction(async (trx) => {
+      const [runId] = await trx('test_runs').insert({
+        run_uuid: randomUUID(), motor_id: motorIds[i % motorIds.length], station_id: station.id, lot_id: lot.id,
+        attempt: attemptBase + i, started_at: new Date(), finished_at: new Date(), operator_badge: 'B-0003',
+        program_version: 'bench-1', limit_set_id: dataset.limitSetId, verdict: 'pass', calibration_ok: true, calibration_due: '2099-01-01',
+        body_sha256: '0'.repeat(64), response_json: '{}', source: 'station', received_at: new Date(),
+      });
+      await trx('measurements').insert(dataset.characteristicIds.map((id, k) => ({ run_id: runId, characteristic_id: id, value: 100 + k / 10, lsl: 90, usl: 110, verdict: 'pass' })));
+    });
+  });
+  const rawRunsPerS = runsPerMeasurement / ((performance.now() - start) / 1000);
+
+  ctx.log('look-up: serials through the API while ingest runs…');
+  const serials = (await ctx.db('motors').where({ product_id: dataset.productId }).orderByRaw('RAND()').limit(500).select('serial')).map((m) => m.serial);
+  const latencies: number[] = [];
+  let ingesting = true;
+  const load = runPool(runsPerMeasurement, concurrentStations, (i) => post(i, `${tag}1`)).finally(() => { ingesting = false; });
+  for (let i = 0; ingesting || i < 200; i++) {
+    const t0 = performance.now();
+    const response = await fetch(`${ctx.app.url}/api/v1/motors/${serials[i % serials.length]}`, { headers: { authorization: `Bearer ${readToken}` } });
+    await response.arrayBuffer();
+    if (response.status !== 200) throw new Error(`look-up answered ${response.status}`);
+    latencies.push(performance.now() - t0);
+    if (!ingesting && i >= 200) break;
+  }
+  await load;
+  return {
+    apiRunsPerS: round(apiRunsPerS, 1),
+    rawRunsPerS: round(rawRunsPerS, 1),
+    apiToRawRatio: round(apiRunsPerS / rawRunsPerS, 3),
+    lookupUnderIngestMs: { samples: latencies.length, p50: round(percentile(latencies, 50)), p95: round(percentile(latencies, 95)), p99: round(percentile(latencies, 99)) },
+    targets: { apiToRawRatio: '≥ 0.60', lookupP95Ms: '≤ 25' },
+  };
+}

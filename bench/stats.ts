@@ -1,0 +1,39 @@
+/** Percentile of a sample by the nearest-rank method (sorted copy). */
+export function percentile(values: number[], p: number): number {
+  if (values.length === 0) return Number.NaN;
+  const sorted = [...values].sort((a, b) => a - b);
+  const rank = Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1));
+  return sorted[rank];
+}
+
+export function median(values: number[]): number {
+  return percentile(values, 50);
+}
+
+/** Runs fn repeatedly and returns the median wall time in milliseconds. */
+export async function medianMs(fn: () => unknown | Promise<unknown>, repeats = 15): Promise<number> {
+  const times: number[] = [];
+  for (let i = 0; i < repeats; i++) {
+    const start = performance.now();
+    await fn();
+    times.push(performance.now() - start);
+  }
+  return round(median(times));
+}
+
+export function round(value: number, digits = 2): number {
+  const f = 10 ** digits;
+  return Math.round(value * f) / f;
+}
+
+/** Runs `count` jobs with at most `concurrency` in flight. */
+export async function runPool(count: number, concurrency: number, job: (i: number) => Promise<void>): Promise<void> {
+  let next = 0;
+  await Promise.all(Array.from({ length: concurrency }, async () => {
+    for (;;) {
+      const i = next++;
+      if (i >= count) return;
+      await job(i);
+    }
+  }));
+}
