@@ -1,5 +1,7 @@
 import type { Knex } from 'knex';
+import { join } from 'node:path';
 import { seedDemoPlant } from './demo/seed-demo-plant.js';
+import { fileBlobStore } from '../server/blob-store/file-blob-store.js';
 
 /** About this many motors unless FLUXTRAIL_DEMO_MOTORS says otherwise (browser tests use a few hundred). */
 const defaultMotors = 5000;
@@ -16,6 +18,8 @@ function demoMotors(value: string | undefined): number {
 
 /** knex seed: the invented demo plant (see seeds/demo/). */
 export async function seed(knex: Knex): Promise<void> {
-  const report = await seedDemoPlant(knex, { motors: demoMotors(process.env.FLUXTRAIL_DEMO_MOTORS) });
+  // Raw samples go where the app reads them: the same data directory the server is configured with.
+  const blobs = fileBlobStore(join(process.env.FLUXTRAIL_DATA_DIR ?? '.data', 'blobs'));
+  const report = await seedDemoPlant(knex, { motors: demoMotors(process.env.FLUXTRAIL_DEMO_MOTORS), blobs });
   console.log(`Demo plant: ${report.motors} motors, ${report.runs} runs in ${(report.elapsedMs / 1000).toFixed(1)} s.`);
 }

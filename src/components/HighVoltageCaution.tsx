@@ -22,7 +22,8 @@ export function HighVoltageCaution({ context }: HighVoltageCautionProps) {
         <p className="font-semibold">High voltage{context ? ` — ${context}` : ''}</p>
         <p className="mt-0.5">
           Hipot and insulation tests apply hazardous voltages. Setting up, running and guarding these tests
-          follows your site's electrical-safety rules and local codes; those take precedence over anything shown here.
+          follows your site's electrical-safety procedures, local codes and licensed practice; those take precedence
+          over anything shown here. Fluxtrail records and judges results; it does not operate test equipment.
         </p>
       </div>
     </aside>

@@ -9,6 +9,10 @@ import { planMotors } from '../../seeds/demo/plan-motors.js';
 import { truncateAll } from '../support/migrate.js';
 import { testConfig } from '../support/test-config.js';
 import { testPorts } from '../support/ports.js';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileBlobStore } from '../../server/blob-store/file-blob-store.js';
 
 const now = new Date();
 // A few hundred motors keep the test quick; FLUXTRAIL_DEMO_MOTORS=5000 checks (and times) the full demo.
@@ -17,14 +21,27 @@ const requestedMotors = Number(process.env.FLUXTRAIL_DEMO_MOTORS ?? 400);
 describe('demo plant seed', () => {
   let db: Knex;
   let report: DemoSeedReport;
+  const blobDir = mkdtempSync(join(tmpdir(), 'fluxtrail-seed-blobs-'));
 
   beforeAll(async () => {
     db = createDb(testConfig({ database: 'fluxtrail_test', port: testPorts.apiApp, idpPort: testPorts.idp, smtpPort: testPorts.smtp }).db);
     await truncateAll(db);
-    report = await seedDemoPlant(db, { motors: requestedMotors, now });
+    report = await seedDemoPlant(db, { motors: requestedMotors, now, blobs: fileBlobStore(blobDir) });
     console.log(`demo seed (${requestedMotors} requested): ${report.motors} motors, ${report.runs} runs in ${report.elapsedMs} ms`);
   }, 180_000);
-  afterAll(async () => { await db.destroy(); });
+  afterAll(async () => {
+    await db.destroy();
+    rmSync(blobDir, { recursive: true, force: true });
+  });
+
+  it('when the newest PM motors and the notable faults are seeded, then they carry back-EMF waveforms analysed on ingest', async () => {
+    const rows = await db('waveforms').join('test_runs', 'test_runs.id', 'waveforms.run_id').join('motors', 'motors.id', 'test_runs.motor_id')
+      .where('motors.serial', demoSerials.damagedMagnet).select('waveforms.kind', 'waveforms.summary_json');
+    expect(rows.length).toBe(2); // failed twice, each attempt with its spin
+    expect(rows[0].kind).toBe('back-emf');
+    const total = await db('waveforms').count({ n: '*' }).first();
+    expect(Number(total?.n)).toBeGreaterThanOrEqual(200);
+  });
 
   const motor = (serial: string) => db('motors').where({ serial }).first('id', 'status', 'attempts');
   const measurementsOf = (serial: string, attempt: number) => db('measurements')

@@ -21,6 +21,7 @@ export default async function setup(project: TestProject) {
   const db = createDb(config.db);
   await resetSchema(db);
   process.env.FLUXTRAIL_DEMO_MOTORS ??= '600';
+  process.env.FLUXTRAIL_DATA_DIR = config.dataDir; // the seed writes waveform samples where this app reads them
   if (existsSync('seeds') && readdirSync('seeds').some((f) => f.endsWith('.ts'))) await db.seed.run();
   await db.destroy();
   const idp = await startIdp({ port: testPorts.browserIdp, appBaseUrls: [appUrl] });
