@@ -34,6 +34,7 @@ export function mariadbPaths(baseDir) {
     socket: join(baseDir, 'mariadb.sock'),
     pidFile: join(baseDir, 'mariadb.pid'),
     logFile: join(baseDir, 'mariadb.log'),
+    tmpDir: join(baseDir, 'tmp'),
   };
 }
 
@@ -69,11 +70,13 @@ export async function startMariadb({ baseDir, port }) {
     ], { encoding: 'utf8' });
     if (init.status !== 0) throw new Error(`mariadb-install-db failed: ${init.stderr}`);
   }
+  // Its own temporary directory: a shared /tmp may be cleaned under a running server.
+  mkdirSync(paths.tmpDir, { recursive: true });
   const log = openSync(paths.logFile, 'a');
   const child = spawn(findBinary('mariadbd'), [
     '--no-defaults', `--datadir=${paths.dataDir}`, `--socket=${paths.socket}`, `--port=${port}`,
     '--bind-address=127.0.0.1', ...(asRoot ? ['--user=root'] : []), '--skip-name-resolve',
-    `--pid-file=${paths.pidFile}`, `--log-error=${paths.logFile}`,
+    `--pid-file=${paths.pidFile}`, `--log-error=${paths.logFile}`, `--tmpdir=${paths.tmpDir}`,
     '--character-set-server=utf8mb4', '--collation-server=utf8mb4_unicode_ci',
     '--innodb-buffer-pool-size=512M', '--max-connections=400',
   ], { stdio: ['ignore', log, log] });
