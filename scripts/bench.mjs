@@ -1,0 +1,33 @@
+// `npm run bench`: a plant-scale benchmark in its own MariaDB (data kept in .data/bench-mariadb so
+// the generated set is reused by the next run). Prints the figures and writes bench/results/latest.json.
+import { join, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { ensureNodeModules } from './lib/deps.mjs';
+import { ensureMariadbInstalled, startMariadb, ensureDatabase } from './lib/mariadb.mjs';
+import { loadOrCreateSecrets } from './lib/secrets.mjs';
+import { runNodeSync } from './lib/children.mjs';
+
+const root = resolve(fileURLToPath(new URL('..', import.meta.url)));
+const port = Number(process.env.FLUXTRAIL_BENCH_DB_PORT ?? 3309);
+ensureNodeModules(root);
+ensureMariadbInstalled();
+const secrets = loadOrCreateSecrets(join(root, '.data', 'secrets.json'));
+const db = await startMariadb({ baseDir: join(root, '.data', 'bench-mariadb'), port });
+let code = 0;
+try {
+  ensureDatabase(db, { database: 'fluxtrail_bench', user: 'fluxtrail', password: secrets.dbPassword });
+  runNodeSync(['--import', 'tsx', 'bench/run.ts', ...process.argv.slice(2)], {
+    cwd: root,
+    env: {
+      ...process.env,
+      FLUXTRAIL_DB_PORT: String(port), FLUXTRAIL_DB_NAME: 'fluxtrail_bench', FLUXTRAIL_DB_PASSWORD: secrets.dbPassword,
+      FLUXTRAIL_SESSION_SECRET: secrets.sessionSecret, FLUXTRAIL_DB_POOL_MAX: '40',
+    },
+  });
+} catch (error) {
+  console.error(error instanceof Error ? error.message : error);
+  code = 1;
+} finally {
+  await db.stop();
+}
+process.exit(code);
