@@ -11,6 +11,7 @@ import { setupRouter } from './v1/setup/index.js';
 import { spcRouter } from './v1/spc.js';
 import { signalsRouter } from './v1/signals.js';
 import { yieldRouter } from './v1/yield.js';
+import { uploadsRouter } from './v1/uploads.js';
 import { join } from 'node:path';
 import { fileBlobStore } from '../blob-store/file-blob-store.js';
 
@@ -32,6 +33,7 @@ export function apiRouter({ db, config }: AppDeps) {
   router.use('/v1/spc', spcRouter(db));
   router.use('/v1/signals', signalsRouter(db));
   router.use('/v1/yield', yieldRouter(db));
+  router.use('/v1/uploads', uploadsRouter({ db, config }));
   router.use('/v1', v1Router(db, fileBlobStore(join(config.dataDir, 'blobs'))));
   router.use(openapiRouter(config.oidc.issuer));
   return router;
