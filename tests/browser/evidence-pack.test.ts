@@ -12,7 +12,7 @@ describe('an auditor builds, downloads and verifies an evidence pack', () => {
   it('when auditor packs the demo drifting lot, then the download hashes to the SHA-256 shown and the audit chain verifies', async () => {
     const { page } = browser;
     await signInAs(page, appUrl, 'auditor');
-    await expect.poll(() => page.getByRole('navigation').getByRole('link', { name: 'Evidence packs' }).count()).toBe(1);
+    await expect.poll(() => page.getByRole('navigation', { name: 'Screens' }).getByRole('link', { name: 'Evidence packs' }).count()).toBe(1);
     await page.goto(`${appUrl}/evidence-packs`);
     await page.getByTestId('pack-lots').fill(driftingLotCode);
     await page.getByTestId('pack-create').click();

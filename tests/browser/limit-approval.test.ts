@@ -10,7 +10,7 @@ describe('two-person approval of a limit revision in Setup', () => {
   it('when quality2 drafts a revision, then quality (not its author) approves it and it is in force', async () => {
     const { page } = browser;
     await signInAs(page, appUrl, 'quality2');
-    await expect.poll(() => page.getByRole('navigation').getByRole('link', { name: 'Setup' }).count()).toBe(1);
+    await expect.poll(() => page.getByRole('navigation', { name: 'Screens' }).getByRole('link', { name: 'Setup' }).count()).toBe(1);
     await page.goto(`${appUrl}/setup?section=limits&product=IM-4P`);
     await page.getByRole('button', { name: 'New draft from the revision in force' }).click();
     const usl = page.getByLabel('USL for no_load_current');
@@ -24,7 +24,7 @@ describe('two-person approval of a limit revision in Setup', () => {
     await expect.poll(() => page.url()).toContain('/signed-out');
 
     await signInAs(page, appUrl, 'quality');
-    await expect.poll(() => page.getByRole('navigation').getByRole('link', { name: 'Setup' }).count()).toBe(1);
+    await expect.poll(() => page.getByRole('navigation', { name: 'Screens' }).getByRole('link', { name: 'Setup' }).count()).toBe(1);
     await page.goto(`${appUrl}/setup?section=limits&product=IM-4P`);
     const draftButton = page.getByRole('list', { name: 'Limit revisions' }).getByRole('button', { name: /draft/ });
     await draftButton.click();

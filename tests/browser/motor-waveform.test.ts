@@ -50,7 +50,7 @@ describe('Motor record: back-EMF waveform, spectrum and raw readings in Chromium
   it('when quality opens a motor record whose run carries a back-EMF spin, then the traces, spectrum, resolver offset and readings show', async () => {
     const { page } = browser;
     await signInAs(page, appUrl, 'quality');
-    await expect.poll(() => page.getByRole('navigation').isVisible()).toBe(true);
+    await expect.poll(() => page.getByRole('navigation', { name: 'Screens' }).isVisible()).toBe(true);
     await page.goto(`${appUrl}/motors/${serial}`);
     const trace = page.getByRole('figure', { name: 'Back-EMF line-to-line voltages' });
     await expect.poll(() => trace.locator('canvas').count(), { timeout: 20_000 }).toBeGreaterThan(0);

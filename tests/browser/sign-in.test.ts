@@ -13,7 +13,7 @@ describe('signing in through the IdP fake in Chromium', () => {
     await page.goto(`${appUrl}/`);
     await screenshot(page, 'signin-page');
     await signInAs(page, appUrl, 'operator');
-    const nav = page.getByRole('navigation');
+    const nav = page.getByRole('navigation', { name: 'Screens' });
     await expect.poll(() => nav.getByRole('link').allInnerTexts()).toEqual(['Scan', 'Motors', 'Lots']);
     await expect.poll(() => page.url()).toContain('/scan');
     await screenshot(page, 'shell-operator');
@@ -33,7 +33,7 @@ describe('signing in through the IdP fake in Chromium', () => {
   it('when quality signs in, then the quality screens show and operator-only ones do not', async () => {
     const { page } = browser;
     await signInAs(page, appUrl, 'quality');
-    const nav = page.getByRole('navigation');
+    const nav = page.getByRole('navigation', { name: 'Screens' });
     await expect.poll(() => nav.getByRole('link').allInnerTexts()).toContain('Signals');
     const links = await nav.getByRole('link').allInnerTexts();
     expect(links).toContain('Setup');

@@ -10,7 +10,7 @@ describe('a quality engineer answers an SPC signal of the demo drifting lot', ()
   it('when quality opens an open signal, contains it and closes it, then its status follows each step', async () => {
     const { page } = browser;
     await signInAs(page, appUrl, 'quality');
-    await expect.poll(() => page.getByRole('navigation').getByRole('link', { name: 'Signals' }).count()).toBe(1);
+    await expect.poll(() => page.getByRole('navigation', { name: 'Screens' }).getByRole('link', { name: 'Signals' }).count()).toBe(1);
     await page.goto(`${appUrl}/signals`);
     await page.getByRole('button', { name: 'Open', exact: true }).click();
     const firstSignal = page.getByRole('link', { name: /^Signal \d+/ }).first();
