@@ -5,6 +5,7 @@ import { ProductsSection } from '../features/setup/components/ProductsSection';
 import { SetupTabs, setupSections, type SetupSectionId } from '../features/setup/components/SetupTabs';
 import { StationClientsSection } from '../features/setup/components/StationClientsSection';
 import { StationsSection } from '../features/setup/components/StationsSection';
+import { ResultUploadsSection } from '../features/uploads/components/ResultUploadsSection';
 
 const isSection = (value: string | null): value is SetupSectionId => setupSections.some((s) => s.id === value);
 
@@ -31,6 +32,7 @@ export default function SetupRoute() {
         {section === 'limits' ? <LimitRevisionsSection productCode={productCode} onSelectProduct={selectProduct} /> : null}
         {section === 'stations' ? <StationsSection /> : null}
         {section === 'clients' ? <StationClientsSection /> : null}
+        {section === 'uploads' ? <ResultUploadsSection /> : null}
       </div>
     </section>
   );

@@ -5,6 +5,7 @@ export const setupSections = [
   { id: 'limits', label: 'Limit revisions' },
   { id: 'stations', label: 'Stations & calibration' },
   { id: 'clients', label: 'Station clients' },
+  { id: 'uploads', label: 'Result uploads' },
 ] as const;
 export type SetupSectionId = (typeof setupSections)[number]['id'];
 
