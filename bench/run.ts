@@ -7,6 +7,8 @@ import { benchIngest } from './ingest.js';
 import { benchSpcRules } from './spc-rules.js';
 import { benchEvidencePack } from './evidence.js';
 import { benchAuditChain } from './audit-chain.js';
+import { benchAnalysis } from './analysis.js';
+import { benchYield } from './yield.js';
 
 const log = (line: string) => console.log(`[bench] ${line}`);
 const wanted = process.argv.slice(2);
@@ -21,7 +23,9 @@ try {
   const measurementCount = await ctx.db('measurements').count({ n: '*' }).first();
   results.dataset = { motors: dataset.motors, measurements: Number(measurementCount?.n ?? 0) };
   if (runs('ingest')) results.ingest = await benchIngest(ctx, dataset, String(25 + (Date.now() % 75)));
+  if (runs('analysis')) results.analysis = { ...(await benchAnalysis()), target: '≤ 20 ms for analyzeBackEmf' };
   if (runs('spc')) results.spcRules = await benchSpcRules();
+  if (runs('yield')) results.yield = await benchYield(ctx, dataset);
   if (runs('evidence')) results.evidencePack = await benchEvidencePack(ctx);
   if (runs('audit')) results.auditChain = await benchAuditChain(ctx);
   results.measuredAt = new Date().toISOString();
