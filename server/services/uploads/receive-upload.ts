@@ -10,8 +10,13 @@ import type { UploadOptions } from './upload-options.js';
 import { runAndFinishPass, startPassInBackground } from './finish-upload-pass.js';
 import { getUpload } from './upload-view.js';
 
-/** From this many data rows on, the dry run goes on in the background and the client polls. */
+/**
+ * From this many data rows, or runs, on, the dry run goes on in the background and the client
+ * polls: each run is checked through ingest (some milliseconds), so a thousand runs already take
+ * longer than a request should wait.
+ */
 export const BACKGROUND_ROWS = 100_000;
+export const BACKGROUND_RUNS = 1_000;
 /** A pass whose heartbeat is older than this is taken to have died with its process. */
 export const STALE_PASS_MS = 2 * 60_000;
 
@@ -41,7 +46,7 @@ export async function receiveUpload(db: Knex, dataDir: string, user: SessionUser
   await mkdir(uploadsFolder(dataDir), { recursive: true });
   // Content-addressed: a file already kept under its hash holds these very bytes.
   if (!(await access(uploadFile.path).then(() => true, () => false))) await writeFile(uploadFile.path, file.bytes);
-  const { rowsTotal } = await surveyRuns(uploadFile);
+  const { rowsTotal, runsTotal } = await surveyRuns(uploadFile);
 
   const fields = { status: 'checking', rows_total: rowsTotal, progress: 0, heartbeat_at: new Date(), error: null, file_name: file.name.slice(0, 255), uploaded_by: user.subject, uploaded_by_name: user.name };
   let id: number;
@@ -60,7 +65,7 @@ export async function receiveUpload(db: Knex, dataDir: string, user: SessionUser
     }
   }
   const actor = { name: user.name, role: user.role };
-  if (rowsTotal >= BACKGROUND_ROWS) {
+  if (rowsTotal >= BACKGROUND_ROWS || runsTotal >= BACKGROUND_RUNS) {
     startPassInBackground(db, id, uploadFile, 'check', actor);
     return { status: 202 as const, body: await getUpload(db, id) };
   }
