@@ -39,7 +39,7 @@ export function spcRouter(db: Knex) {
   router.get('/characteristics', requirePermission('spc:read'), async (req, res) => {
     res.json(await spcCharacteristics(db, z.object({ product: z.string().optional() }).parse(req.query).product));
   });
-  router.get('/characteristics/:id/chart', requirePermission('spc:read'), async (req, res) => {
+  router.get('/characteristics/:id/chart', requirePermission('spc:read', { scopes: ['records:read'] }), async (req, res) => {
     res.json(await chartView(db, id.parse(param(req, 'id')), asWindow(windowQuery.parse(req.query))));
   });
   router.get('/characteristics/:id/subgroups', requirePermission('spc:read'), async (req, res) => {

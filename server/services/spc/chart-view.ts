@@ -2,65 +2,52 @@ import type { Knex } from 'knex';
 import { ruleViolations, type RuleName } from '../../analysis/spc/index.js';
 import { notFound } from '../../errors.js';
 import { currentLimitsOf, type ControlLimitView } from './control-limit-rows.js';
-import { describeSignalRule } from './describe-signal-rule.js';
-import { readValues, runRangeOf, type RunRange } from './series.js';
+import { describeSignalRule, isSignalRule } from './describe-signal-rule.js';
+import { displaySeries } from './display-series.js';
+import { runRangeOf, type RunRange, type SeriesValue } from './series.js';
 import { characteristicFacts, specLimitsOf } from './spec-limits.js';
 
-/** The display never gets more than this many points; statistics are computed elsewhere on all data. */
-export const maxDisplayPoints = 2000;
-
-type Bucket = { fromRunId: number; toRunId: number; min: number; max: number; mean: number; n: number };
-
 /**
- * Long series are cut into maxDisplayPoints/2 run-id buckets and each sends its min and max (so a
- * spike is never averaged away), aggregated by MariaDB over the covering index.
+ * Rule marks on the exact points sent (all values, or the recent tail of a long series) against
+ * the limits in force or the trial ones. On a tail a pattern that began before it is judged from
+ * the tail's first point; the signals list below holds what Phase II found on every value.
  */
-async function bucketsOf(db: Knex, characteristicId: number, range: RunRange, first: number, last: number): Promise<Bucket[]> {
-  const count = maxDisplayPoints / 2;
-  const span = last - first + 1;
-  const [rows] = await db.raw(
-    `SELECT FLOOR((run_id - ?) * ? / ?) AS b, MIN(run_id) AS from_run, MAX(run_id) AS to_run, MIN(value) AS min_v, MAX(value) AS max_v, AVG(value) AS mean_v, COUNT(*) AS n
-       FROM measurements FORCE INDEX (measurements_series)
-      WHERE characteristic_id = ? AND run_id BETWEEN ? AND ?
-      GROUP BY b ORDER BY b`,
-    [first, count, span, characteristicId, range.fromRunId, range.toRunId],
-  ) as [Array<{ from_run: number; to_run: number; min_v: number; max_v: number; mean_v: number; n: number }>];
-  return rows.map((r) => ({ fromRunId: Number(r.from_run), toRunId: Number(r.to_run), min: r.min_v, max: r.max_v, mean: Number(r.mean_v), n: Number(r.n) }));
-}
-
-/** Rule marks on an exact individuals series against the limits in force (or the trial ones). */
-function marks(values: Array<{ runId: number; value: number }>, limits: ControlLimitView | null) {
+function marks(values: readonly SeriesValue[], limits: ControlLimitView | null) {
   if (!limits || limits.chartKind !== 'individuals' || values.length === 0) return [];
   const rules = limits.rules as RuleName[];
   return ruleViolations(values.map((v) => v.value), { center: limits.centre, sigma: limits.sigma }, rules)
     .map((v) => ({ runId: values[v.index].runId, value: values[v.index].value, rule: v.rule, ruleText: describeSignalRule(v.rule) }));
 }
 
+type SignalRow = { id: number; rule: string; first_run_id: number | string; status: string; value: number | null };
+
+/** The newest signals started in the window, each with the value of the point that started it. */
+async function signalsIn(db: Knex, characteristicId: number, range: RunRange) {
+  const rows: SignalRow[] = await db('signals as s')
+    .leftJoin('measurements as m', (on) => on.on('m.run_id', 's.first_run_id').andOn('m.characteristic_id', 's.characteristic_id'))
+    .where('s.characteristic_id', characteristicId).whereBetween('s.first_run_id', [range.fromRunId, range.toRunId])
+    .orderBy('s.id', 'desc').limit(200).select('s.id', 's.rule', 's.first_run_id', 's.status', 'm.value');
+  return rows.map((s) => ({ id: s.id, rule: s.rule, runId: Number(s.first_run_id), status: s.status, value: s.value, ruleText: isSignalRule(s.rule) ? describeSignalRule(s.rule) : s.rule }));
+}
+
+/**
+ * One characteristic's chart for a time window: display series (exact, or summary buckets with
+ * the recent values exact), limits, spec lines, rule marks and signals. No statistic over all
+ * values is computed here; capability has its own request.
+ */
 export async function chartView(db: Knex, characteristicId: number, window: { from?: Date; to?: Date }) {
   const facts = await characteristicFacts(db, characteristicId);
   if (!facts) throw notFound(`No characteristic ${characteristicId}.`);
   const range = await runRangeOf(db, window);
-  const [[stats], limits, spec] = await Promise.all([
-    db('measurements').where({ characteristic_id: characteristicId }).whereBetween('run_id', [range.fromRunId, range.toRunId])
-      .select(db.raw('COUNT(*) AS n, MIN(run_id) AS first, MAX(run_id) AS last')),
-    currentLimitsOf(db, characteristicId),
-    specLimitsOf(db, characteristicId),
+  const [series, limits, spec, signals] = await Promise.all([
+    displaySeries(db, characteristicId, range), currentLimitsOf(db, characteristicId), specLimitsOf(db, characteristicId), signalsIn(db, characteristicId, range),
   ]);
-  const total = Number(stats.n);
-  const inForce = limits.frozen ?? limits.trial;
-  const sampled = total > maxDisplayPoints;
-  const values = sampled ? [] : await readValues(db, characteristicId, range);
-  const signals = await db('signals').where({ characteristic_id: characteristicId }).whereBetween('first_run_id', [range.fromRunId, range.toRunId])
-    .orderBy('id', 'desc').limit(200).select('id', 'rule', 'first_run_id', 'status');
   return {
     characteristic: { id: facts.id, code: facts.code, name: facts.name, unit: facts.unit, product: facts.product_code, spcEnabled: Boolean(facts.spc_enabled) },
     limits,
     spec,
-    total,
-    sampled,
-    points: values,
-    buckets: sampled ? await bucketsOf(db, characteristicId, range, Number(stats.first), Number(stats.last)) : [],
-    violations: sampled ? [] : marks(values, inForce),
-    signals: signals.map((s: { id: number; rule: string; first_run_id: number | string; status: string }) => ({ id: s.id, rule: s.rule, runId: Number(s.first_run_id), status: s.status })),
+    ...series,
+    violations: marks(series.points, limits.frozen ?? limits.trial),
+    signals,
   };
 }

@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
 import { openSignal } from '../signals/open-signal.js';
+import { recordDisplayBlocks } from './display-blocks.js';
 import { phaseTwoStep, type SpcStateData } from './phase-two-step.js';
 import type { SignalRule } from './chart-kinds.js';
 
@@ -18,9 +19,17 @@ type StateRow = { characteristic_id: number; control_limit_id: number; state_jso
  * so concurrent ingests queue instead of deadlocking) and one batched write back; signals only
  * when a rule is broken. A rule broken again at the next plotted point continues its episode;
  * broken after an in-control point it opens a new signal. Characteristics without frozen limits
- * have no spc_state row and cost nothing.
+ * have no spc_state row and cost nothing; every characteristic's value also joins the chart's
+ * display summary.
  */
 export async function evaluateSpcAfterIngest(trx: Knex.Transaction, run: IngestedRun, now = new Date()): Promise<SpcOutcome> {
+  const outcome = await judgeAgainstFrozenLimits(trx, run, now);
+  // After the spc_state locks, so every ingest takes its locks in the same order.
+  await recordDisplayBlocks(trx, run.runId, run.measurements);
+  return outcome;
+}
+
+async function judgeAgainstFrozenLimits(trx: Knex.Transaction, run: IngestedRun, now: Date): Promise<SpcOutcome> {
   const values = new Map(run.measurements.map((m) => [m.characteristicId, m.value]));
   if (values.size === 0) return { openedSignalIds: [] };
   const rows: StateRow[] = await trx('spc_state')

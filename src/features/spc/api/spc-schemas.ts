@@ -23,7 +23,7 @@ export const chartSchema = z.object({
   points: z.array(z.object({ runId: z.number(), value: z.number() })),
   buckets: z.array(z.object({ fromRunId: z.number(), toRunId: z.number(), min: z.number(), max: z.number(), mean: z.number(), n: z.number() })),
   violations: z.array(z.object({ runId: z.number(), value: z.number(), rule: z.string(), ruleText: z.string() })),
-  signals: z.array(z.object({ id: z.number(), rule: z.string(), runId: z.number(), status: z.string() })),
+  signals: z.array(z.object({ id: z.number(), rule: z.string(), runId: z.number(), status: z.string(), value: z.number().nullable(), ruleText: z.string() })),
 });
 export type ChartData = z.infer<typeof chartSchema>;
 

@@ -22,7 +22,7 @@ export function ChartWorkspace({ characteristicId }: { characteristicId: number 
           <h2 className="font-semibold">{data.characteristic.name} <span className="text-graphite-500">({data.characteristic.unit})</span></h2>
           <p className="text-sm" aria-live="polite">
             {data.limits.frozen ? 'Judged against frozen limits' : data.limits.trial ? 'Trial limits — not yet frozen' : 'No control limits yet'}
-            {' · '}{data.total} values{data.sampled ? ` (shown as ${data.buckets.length} min/max buckets)` : ''}
+            {' · '}{data.total} values{data.sampled ? ` (older ones shown as ${data.buckets.length} min/max buckets, the newest ${data.points.length} one by one)` : ''}
           </p>
           <label className="text-sm"><input type="checkbox" checked={showSpec} onChange={(e) => setShowSpec(e.target.checked)} className="mr-1" />Show spec limits</label>
         </div>

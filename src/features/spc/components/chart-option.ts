@@ -19,14 +19,16 @@ function limitLines(limits: Limits | null, spec: ChartData['spec'], showSpec: bo
 }
 
 /**
- * The individuals view of a characteristic: every value (or, for long series, each bucket's min
- * and max so no spike is hidden), the limits in force, optional spec limits and rule marks.
+ * The individuals view of a characteristic: every value, or for long series each older bucket's
+ * min and max (so no spike is hidden) followed by the recent values one by one; the limits in
+ * force, optional spec limits, rule marks on the exact values and the signals Phase II raised.
  */
 export function controlChartOption(data: ChartData, showSpec: boolean): SpcChartOption {
   const limits = data.limits.frozen ?? data.limits.trial;
-  const series: Array<[number, number]> = data.sampled
-    ? data.buckets.flatMap((b) => [[b.fromRunId, b.min], [b.toRunId, b.max]] as Array<[number, number]>)
-    : data.points.map((p) => [p.runId, p.value]);
+  const series: Array<[number, number]> = [
+    ...data.buckets.flatMap((b) => [[b.fromRunId, b.min], [b.toRunId, b.max]] as Array<[number, number]>),
+    ...data.points.map((p): [number, number] => [p.runId, p.value]),
+  ];
   return {
     animation: false,
     grid: { left: 64, right: 96, top: 24, bottom: 64 },
@@ -48,6 +50,11 @@ export function controlChartOption(data: ChartData, showSpec: boolean): SpcChart
       {
         type: 'scatter', name: 'Rule broken', symbol: 'diamond', symbolSize: 11, itemStyle: { color: ink.mark },
         data: data.violations.map((v) => ({ value: [v.runId, v.value], name: `${v.rule}: ${v.ruleText}` })),
+        tooltip: { formatter: (p: unknown) => (p as { name: string }).name },
+      },
+      {
+        type: 'scatter', name: 'Signal raised', symbol: 'triangle', symbolSize: 10, itemStyle: { color: ink.limit },
+        data: data.signals.filter((s) => s.value !== null).map((s) => ({ value: [s.runId, s.value], name: `Signal ${s.id} (${s.status}): ${s.ruleText}` })),
         tooltip: { formatter: (p: unknown) => (p as { name: string }).name },
       },
     ],
