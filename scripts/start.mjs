@@ -78,6 +78,7 @@ try {
     FLUXTRAIL_SMTP_PORT: String(ports.smtp),
     FLUXTRAIL_DATA_DIR: dataDir,
     FLUXTRAIL_STATIC_DIR: join(root, 'dist'),
+    FLUXTRAIL_WORKERS: process.env.FLUXTRAIL_WORKERS ?? '2', // one app process per core
     IDP_PORT: String(ports.idp),
     APP_BASE_URLS: `http://127.0.0.1:${ports.app},http://127.0.0.1:${ports.vite}`,
     MAIL_SMTP_PORT: String(ports.smtp),

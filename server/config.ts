@@ -23,6 +23,7 @@ const configSchema = z.object({
   FLUXTRAIL_STATIC_DIR: z.string().default('dist'),
   FLUXTRAIL_JOBS: z.enum(['on', 'off']).default('on'),
   FLUXTRAIL_LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(30),
+  FLUXTRAIL_WORKERS: z.coerce.number().int().min(1).max(32).default(1),
 });
 
 export type Config = {
@@ -37,6 +38,8 @@ export type Config = {
   staticDir: string;
   jobsEnabled: boolean;
   loginRateLimit: number;
+  /** App processes sharing the port (node:cluster); the server is stateless, so any number may run. */
+  workers: number;
 };
 
 export class ConfigError extends Error {}
@@ -66,5 +69,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     staticDir: e.FLUXTRAIL_STATIC_DIR,
     jobsEnabled: e.FLUXTRAIL_JOBS === 'on',
     loginRateLimit: e.FLUXTRAIL_LOGIN_RATE_LIMIT,
+    workers: e.FLUXTRAIL_WORKERS,
   };
 }

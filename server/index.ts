@@ -6,6 +6,8 @@ import { buildApp } from './app.js';
 import { startJobs } from './jobs/start-jobs.js';
 import { startMailOutbox } from './jobs/mail-outbox.js';
 import type { Knex } from 'knex';
+import cluster from 'node:cluster';
+import { runWorkers } from './workers.js';
 
 export type RunningServer = { server: Server; db: Knex; config: Config; url: string; stop(): Promise<void> };
 
@@ -31,14 +33,24 @@ export async function startServer(config: Config = loadConfig()): Promise<Runnin
   };
 }
 
+/** Runs one server in this process until SIGTERM/SIGINT. */
+async function serveUntilStopped(config: Config) {
+  const running = await startServer(config);
+  console.log(`Fluxtrail API and app on ${running.config.publicUrl} (process ${process.pid})`);
+  const shutdown = () => void running.stop().then(() => process.exit(0));
+  process.on('SIGTERM', shutdown);
+  process.on('SIGINT', shutdown);
+}
+
 const isMain = import.meta.url === `file://${process.argv[1]}`;
 if (isMain) {
   try {
-    const running = await startServer();
-    console.log(`Fluxtrail API and app on ${running.config.publicUrl}`);
-    const shutdown = () => void running.stop().then(() => process.exit(0));
-    process.on('SIGTERM', shutdown);
-    process.on('SIGINT', shutdown);
+    const config = loadConfig();
+    if (config.workers > 1 && cluster.isPrimary) {
+      runWorkers(config.workers);
+    } else {
+      await serveUntilStopped(config);
+    }
   } catch (error) {
     if (error instanceof ConfigError) {
       console.error(error.message);

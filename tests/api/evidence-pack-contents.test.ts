@@ -1,3 +1,4 @@
+import type { Response } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import ExcelJS from 'exceljs';
 import { execFileSync } from 'node:child_process';
@@ -12,10 +13,12 @@ import { parseCsv, sha256, unzip } from './evidence-zip.js';
 
 type DbRun = { id: number; run_uuid: string; serial: string; product: string; attempt: number; started_at: Date; station: string; operator_badge: string; revision: number; verdict: string };
 
-const binaryParser = (res: NodeJS.ReadableStream, done: (err: Error | null, body: Buffer) => void) => {
+// supertest hands the parser the raw response stream, typed as its Response.
+const binaryParser = (res: Response, done: (err: Error | null, body: Buffer) => void) => {
+  const stream = res as unknown as NodeJS.ReadableStream;
   const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => done(null, Buffer.concat(chunks)));
+  stream.on('data', (c: Buffer) => chunks.push(c));
+  stream.on('end', () => done(null, Buffer.concat(chunks)));
 };
 
 describe('evidence pack contents', () => {
@@ -44,7 +47,7 @@ describe('evidence pack contents', () => {
     zipBytes = download.body as Buffer;
     files = await unzip(zipBytes);
     workbook = new ExcelJS.Workbook();
-    await workbook.xlsx.load(files.get(`fluxtrail-pack-${status.id}-workbook.xlsx`)!);
+    await workbook.xlsx.load(files.get(`fluxtrail-pack-${status.id}-workbook.xlsx`)! as unknown as ArrayBuffer);
     runs = await server.db({ r: 'test_runs' }).join({ m: 'motors' }, 'm.id', 'r.motor_id').join({ p: 'products' }, 'p.id', 'm.product_id')
       .join({ s: 'stations' }, 's.id', 'r.station_id').join({ ls: 'limit_sets' }, 'ls.id', 'r.limit_set_id').join({ l: 'lots' }, 'l.id', 'm.lot_id')
       .whereIn('l.code', filter.lots).orderBy('r.id')

@@ -5,7 +5,7 @@ import { decideRelease } from '../../../src/features/motors/components/scan/rele
 const run = (verdict: 'pass' | 'fail'): TestRun => ({
   runId: 'r1', attempt: 1, verdict, startedAt: '2026-12-01T08:00:00Z', finishedAt: '2026-12-01T08:02:00Z',
   station: { code: 'EOL-A1', line: 'A' }, operatorBadge: 'B-1', programVersion: '1.0', limitRevision: 1,
-  calibrationOk: true, calibrationDue: '2027-01-01', results: [], waveforms: [],
+  calibrationOk: true, calibrationDue: '2027-01-01', results: [], waveforms: [], readings: [],
 });
 
 const hold = (releasedAt: string | null): Hold => ({
