@@ -1,11 +1,12 @@
+import { spawn, type ChildProcess } from 'node:child_process';
 import type { Knex } from 'knex';
 import { startIdp } from '../idp-fake/index.js';
-import { startServer, type RunningServer } from '../server/index.js';
 import { loadConfig } from '../server/config.js';
+import { createDb } from '../server/db/knex.js';
 
 export type BenchContext = {
   db: Knex;
-  app: RunningServer;
+  app: { url: string };
   idpUrl: string;
   log: (line: string) => void;
   stop(): Promise<void>;
@@ -14,16 +15,42 @@ export type BenchContext = {
 const appPort = 3130;
 const idpPort = 3131;
 
-/** The real app and IdP fake against the bench database (jobs off so only the measured work runs). */
+async function waitForHealth(url: string, child: ChildProcess): Promise<void> {
+  for (let i = 0; i < 300; i++) {
+    if (child.exitCode !== null) throw new Error(`the app exited with code ${child.exitCode}`);
+    try {
+      const response = await fetch(`${url}/api/health`);
+      if (response.ok) return;
+    } catch { /* not listening yet */ }
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  throw new Error('the app did not answer /api/health within 60 s');
+}
+
+/**
+ * The real app as it runs in production — separate processes, one per core (FLUXTRAIL_WORKERS,
+ * default 2) — and the IdP fake, against the bench database. Jobs are off so only the measured
+ * work runs. The bench's own queries use a connection pool of their own.
+ */
 export async function startBenchApp(log: (line: string) => void): Promise<BenchContext> {
   const idp = await startIdp({ port: idpPort, appBaseUrls: [`http://127.0.0.1:${appPort}`] });
-  const config = loadConfig({ ...process.env, FLUXTRAIL_PORT: String(appPort), FLUXTRAIL_PUBLIC_URL: `http://127.0.0.1:${appPort}`, FLUXTRAIL_OIDC_ISSUER: idp.issuer, FLUXTRAIL_STATIC_DIR: '.data/no-static' });
-  const app = await startServer({ ...config, jobsEnabled: false });
-  await app.db.migrate.latest();
+  const env = {
+    ...process.env, FLUXTRAIL_PORT: String(appPort), FLUXTRAIL_PUBLIC_URL: `http://127.0.0.1:${appPort}`,
+    FLUXTRAIL_OIDC_ISSUER: idp.issuer, FLUXTRAIL_STATIC_DIR: '.data/no-static', FLUXTRAIL_JOBS: 'off',
+    FLUXTRAIL_WORKERS: process.env.FLUXTRAIL_WORKERS ?? '2',
+  };
+  const db = createDb(loadConfig(env).db);
+  await db.migrate.latest();
+  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], { env, stdio: ['ignore', 'ignore', 'inherit'] });
+  const url = `http://127.0.0.1:${appPort}`;
+  await waitForHealth(url, child);
   return {
-    db: app.db, app, idpUrl: idp.issuer, log,
+    db, app: { url }, idpUrl: idp.issuer, log,
     async stop() {
-      await app.stop();
+      const exited = new Promise((resolve) => child.once('exit', resolve));
+      child.kill('SIGTERM');
+      await exited;
+      await db.destroy();
       await idp.close();
     },
   };
