@@ -25,6 +25,8 @@ try {
   if (runs('ingest')) results.ingest = await benchIngest(ctx, dataset, String(25 + (Date.now() % 75)));
   if (runs('analysis')) results.analysis = { ...(await benchAnalysis()), target: '≤ 20 ms for analyzeBackEmf' };
   if (runs('spc')) results.spcRules = await benchSpcRules();
+  if (runs('spc-chart')) results.spcChart = await (await import('./spc-chart.js')).benchSpcChart(ctx, dataset);
+  if (runs('spc-ingest')) results.spcIngest = await (await import('./spc-ingest.js')).benchIngestWithRules(ctx, dataset);
   if (runs('yield')) results.yield = await benchYield(ctx, dataset);
   if (runs('evidence')) results.evidencePack = await benchEvidencePack(ctx);
   if (runs('audit')) results.auditChain = await benchAuditChain(ctx);
