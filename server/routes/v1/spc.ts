@@ -10,6 +10,7 @@ import { computeTrialLimits } from '../../services/spc/compute-trial-limits.js';
 import { excludeBaselinePoint } from '../../services/spc/exclude-baseline-point.js';
 import { freezeControlLimits } from '../../services/spc/freeze-control-limits.js';
 import { spcCharacteristics } from '../../services/spc/list-characteristics.js';
+import { ruleChoices } from '../../services/spc/describe-signal-rule.js';
 import { param } from './param.js';
 
 const id = z.coerce.number().int().positive();
@@ -38,6 +39,9 @@ export function spcRouter(db: Knex) {
   const router = Router();
   router.get('/characteristics', requirePermission('spc:read'), async (req, res) => {
     res.json(await spcCharacteristics(db, z.object({ product: z.string().optional() }).parse(req.query).product));
+  });
+  router.get('/rules', requirePermission('spc:read'), (_req, res) => {
+    res.json(ruleChoices());
   });
   router.get('/characteristics/:id/chart', requirePermission('spc:read', { scopes: ['records:read'] }), async (req, res) => {
     res.json(await chartView(db, id.parse(param(req, 'id')), asWindow(windowQuery.parse(req.query))));

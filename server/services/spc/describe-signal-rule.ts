@@ -1,5 +1,5 @@
 import { describeRule, type RuleName } from '../../analysis/spc/index.js';
-import { selectableRules, type ChartRule, type SignalRule } from './chart-kinds.js';
+import { defaultRules, selectableRules, type ChartRule, type SignalRule } from './chart-kinds.js';
 
 const chartRuleText: Record<ChartRule, string> = {
   'ewma-beyond': 'The EWMA of the values moved outside its control limits.',
@@ -15,4 +15,9 @@ export function isSignalRule(value: string): value is SignalRule {
 export function describeSignalRule(rule: SignalRule): string {
   if (Object.prototype.hasOwnProperty.call(chartRuleText, rule)) return chartRuleText[rule as ChartRule];
   return describeRule(rule as RuleName);
+}
+
+/** The run rules an engineer may pick for trial limits, each in plain words, the defaults marked. */
+export function ruleChoices() {
+  return { rules: selectableRules.map((rule) => ({ rule, text: describeRule(rule), family: rule.startsWith('nelson') ? 'nelson' : 'western-electric', isDefault: defaultRules.includes(rule) })) };
 }

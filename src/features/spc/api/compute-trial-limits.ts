@@ -4,7 +4,7 @@ import { chartQueryKey } from './get-chart';
 import { spcCharacteristicsQueryKey } from './get-characteristics';
 import { limitsSchema, type Limits } from './spc-schemas';
 
-export type TrialLimitsRequest = { characteristicId: number; chartKind: Limits['chartKind']; subgroupSize?: number; from?: string; to?: string };
+export type TrialLimitsRequest = { characteristicId: number; chartKind: Limits['chartKind']; subgroupSize?: number; from?: string; to?: string; rules?: string[] };
 
 export function computeTrialLimits({ characteristicId, ...body }: TrialLimitsRequest): Promise<Limits> {
   return apiClient.post(`/api/v1/spc/characteristics/${characteristicId}/trial-limits`, { schema: limitsSchema, body });

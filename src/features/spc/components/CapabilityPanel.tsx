@@ -1,6 +1,7 @@
 import { ErrorNote } from '../../../components/ErrorNote';
 import { Spinner } from '../../../components/Spinner';
 import { useCapability } from '../api/get-capability';
+import type { ChartWindow } from '../api/chart-window';
 import type { CapabilityData } from '../api/spc-schemas';
 import { LazyControlChart } from './LazyControlChart';
 import type { SpcChartOption } from './ControlChart';
@@ -25,8 +26,8 @@ function histogramOption(data: CapabilityData): SpcChartOption {
 }
 
 /** Capability of all data of the characteristic (AIAG indices with Bissell 95 % bounds on Cpk). */
-export function CapabilityPanel({ characteristicId }: { characteristicId: number }) {
-  const { data, error, isPending } = useCapability(characteristicId);
+export function CapabilityPanel({ characteristicId, window }: { characteristicId: number; window: ChartWindow }) {
+  const { data, error, isPending } = useCapability(characteristicId, window);
   if (isPending) return <Spinner label="Computing capability…" />;
   if (error) return <ErrorNote error={error} title="Could not compute capability" />;
   const study = data.study;

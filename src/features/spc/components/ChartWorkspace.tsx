@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { ErrorNote } from '../../../components/ErrorNote';
 import { Spinner } from '../../../components/Spinner';
+import type { ChartWindow } from '../api/chart-window';
 import { useChart } from '../api/get-chart';
 import { CapabilityPanel } from './CapabilityPanel';
 import { controlChartOption } from './chart-option';
@@ -9,9 +10,9 @@ import { LimitsPanel } from './LimitsPanel';
 import { LotSubgroupChart } from './LotSubgroupChart';
 
 /** Everything about one characteristic's control chart: the chart, its limits, lots and capability. */
-export function ChartWorkspace({ characteristicId }: { characteristicId: number }) {
+export function ChartWorkspace({ characteristicId, window }: { characteristicId: number; window: ChartWindow }) {
   const [showSpec, setShowSpec] = useState(true);
-  const { data, error, isPending } = useChart(characteristicId);
+  const { data, error, isPending } = useChart(characteristicId, window);
   if (isPending) return <Spinner label="Loading the chart…" size="lg" />;
   if (error) return <ErrorNote error={error} title="Could not load the chart" />;
   const inForce = data.limits.frozen ?? data.limits.trial;
@@ -34,9 +35,9 @@ export function ChartWorkspace({ characteristicId }: { characteristicId: number 
           </details>
         ) : null}
       </section>
-      <LimitsPanel data={data} />
-      <LotSubgroupChart characteristicId={characteristicId} limits={inForce} />
-      <CapabilityPanel characteristicId={characteristicId} />
+      <LimitsPanel data={data} window={window} />
+      <LotSubgroupChart characteristicId={characteristicId} limits={inForce} window={window} />
+      <CapabilityPanel characteristicId={characteristicId} window={window} />
     </div>
   );
 }

@@ -5,7 +5,9 @@ import { useCan } from '../../auth/use-can';
 import { useComputeTrialLimits } from '../api/compute-trial-limits';
 import { useExcludePoint } from '../api/exclude-point';
 import { useFreezeLimits } from '../api/freeze-limits';
+import type { ChartWindow } from '../api/chart-window';
 import type { ChartData, Limits } from '../api/spc-schemas';
+import { RulePicker } from './RulePicker';
 
 const kindNames: Record<Limits['chartKind'], string> = {
   individuals: 'Individuals (every run)',
@@ -29,11 +31,13 @@ function LimitsFacts({ limits }: { limits: Limits }) {
 }
 
 /** Phase I and II in one place: the limits in force, the trial being prepared, and its actions. */
-export function LimitsPanel({ data }: { data: ChartData }) {
+export function LimitsPanel({ data, window }: { data: ChartData; window: ChartWindow }) {
   const canManage = useCan('spc:manage');
   const [kind, setKind] = useState<Limits['chartKind']>('individuals');
   const [excludeRun, setExcludeRun] = useState('');
   const [reason, setReason] = useState('');
+  // null until the engineer touches a box: the server's defaults are then sent as no choice at all.
+  const [rules, setRules] = useState<string[] | null>(null);
   const compute = useComputeTrialLimits();
   const exclude = useExcludePoint();
   const freeze = useFreezeLimits();
@@ -71,15 +75,21 @@ export function LimitsPanel({ data }: { data: ChartData }) {
         </div>
       ) : null}
       {canManage ? (
+        <div className="space-y-3">
+          {kind === 'individuals' || kind === 'xbar-s-lot' || kind === 'xbar-s-consecutive'
+            ? <RulePicker chosen={rules} onChange={setRules} />
+            : <p className="text-sm text-graphite-500">EWMA and CUSUM signal on their own limits; they take no run rules.</p>}
         <div className="flex flex-wrap items-end gap-2">
           <label className="text-sm">Chart for new trial limits
             <select aria-label="Chart kind" value={kind} onChange={(e) => setKind(e.target.value as Limits['chartKind'])} className="ml-2 rounded border border-graphite-300 px-2 py-1">
               {Object.entries(kindNames).map(([value, name]) => <option key={value} value={value}>{name}</option>)}
             </select>
           </label>
-          <Button variant="secondary" size="sm" disabled={compute.isPending} onClick={() => compute.mutate({ characteristicId, chartKind: kind })}>
-            Compute trial limits from all data
+          <Button variant="secondary" size="sm" disabled={compute.isPending}
+            onClick={() => compute.mutate({ characteristicId, chartKind: kind, ...window, ...(rules && rules.length > 0 ? { rules } : {}) })}>
+            {window.from || window.to ? 'Compute trial limits from this window' : 'Compute trial limits from all data'}
           </Button>
+        </div>
         </div>
       ) : null}
       {[compute.error, exclude.error, freeze.error].filter(Boolean).map((error, i) => <ErrorNote key={i} error={error} title="Not saved" />)}

@@ -1,12 +1,13 @@
 import { ErrorNote } from '../../../components/ErrorNote';
 import { Spinner } from '../../../components/Spinner';
 import { useSubgroups } from '../api/get-subgroups';
+import type { ChartWindow } from '../api/chart-window';
 import type { Limits } from '../api/spc-schemas';
 import { LazyControlChart } from './LazyControlChart';
 
 /** Mean of each lot, with the limits of an X̄ chart for that lot's size when lot limits are in force. */
-export function LotSubgroupChart({ characteristicId, limits }: { characteristicId: number; limits: Limits | null }) {
-  const { data, error, isPending } = useSubgroups(characteristicId);
+export function LotSubgroupChart({ characteristicId, limits, window }: { characteristicId: number; limits: Limits | null; window: ChartWindow }) {
+  const { data, error, isPending } = useSubgroups(characteristicId, window);
   if (isPending) return <Spinner label="Loading lot subgroups…" />;
   if (error) return <ErrorNote error={error} title="Could not load lot subgroups" />;
   const byLot = limits?.chartKind === 'xbar-s-lot' ? limits : null;
