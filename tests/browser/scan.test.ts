@@ -15,7 +15,9 @@ describe('the Scan screen, as an operator with a keyboard-wedge scanner', () => 
     const serial = page.getByLabel('Serial');
     const decision = page.getByRole('region', { name: 'Release decision' });
 
-    // A scanner types the serial and Enter into the focused field.
+    // A scanner types the serial and Enter into whatever has focus: the serial field must have it.
+    const serialFocused = () => serial.evaluate((el) => el === document.activeElement);
+    await expect.poll(serialFocused).toBe(true);
     await page.keyboard.type(demoSerials.passing);
     await page.keyboard.press('Enter');
     await expect.poll(() => decision.getAttribute('data-decision')).toBe('may ship');
@@ -24,13 +26,14 @@ describe('the Scan screen, as an operator with a keyboard-wedge scanner', () => 
     expect(await steps.count()).toBeGreaterThan(5);
     await screenshot(page, 'scan-may-ship');
 
-    await expect.poll(() => serial.evaluate((el) => el === document.activeElement)).toBe(true);
+    await expect.poll(serialFocused).toBe(true);
     await page.keyboard.type(demoSerials.onCalibrationHold);
     await page.keyboard.press('Enter');
     await expect.poll(() => decision.getAttribute('data-decision')).toBe('on hold');
     expect(await page.getByRole('list', { name: 'Active holds' }).innerText()).toMatch(/calibration/i);
     await screenshot(page, 'scan-on-hold');
 
+    await expect.poll(serialFocused).toBe(true);
     await page.keyboard.type(demoSerials.damagedMagnet);
     await page.keyboard.press('Enter');
     await expect.poll(() => decision.getAttribute('data-decision')).toBe('must not ship');
@@ -38,6 +41,7 @@ describe('the Scan screen, as an operator with a keyboard-wedge scanner', () => 
     expect(await firstStep.getAttribute('data-verdict')).toBe('fail');
     await screenshot(page, 'scan-must-not-ship');
 
+    await expect.poll(serialFocused).toBe(true);
     await page.keyboard.type('PM150-999999');
     await page.keyboard.press('Enter');
     await expect.poll(() => decision.getAttribute('data-decision')).toBe('not found');

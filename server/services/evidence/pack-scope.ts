@@ -27,6 +27,14 @@ export function packMotors(db: Knex, filter: PackFilter): Knex.QueryBuilder {
   return q;
 }
 
+/**
+ * The pack's serials in order, read once. Paging the filtered join by "serial > last LIMIT n"
+ * makes MariaDB join and sort the whole filtered set again for every page.
+ */
+export async function packSerials(db: Knex, filter: PackFilter): Promise<string[]> {
+  return ((await packMotors(db, filter).orderBy('m.serial').select('m.serial')) as Array<{ serial: string }>).map((r) => r.serial);
+}
+
 /** The pack's runs: test_runs r joined to the pack's motors (and their lot and product). */
 export function packRuns(db: Knex, filter: PackFilter): Knex.QueryBuilder {
   return runWindow(filter, packMotors(db, filter).join({ r: 'test_runs' }, 'r.motor_id', 'm.id'));

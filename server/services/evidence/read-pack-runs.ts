@@ -26,8 +26,20 @@ type MeasurementRow = {
 };
 
 /**
+ * The pack's run ids in order, read once. Paging the filtered join itself ("id > last ORDER BY id
+ * LIMIT n") makes MariaDB join and sort the whole filtered set for every page; a list of ids
+ * (8 bytes a run) lets each page fetch its rows by primary key instead.
+ */
+async function packRunIds(db: Knex, filter: PackFilter, productId: number | undefined): Promise<number[]> {
+  const q = packRuns(db, filter).orderBy('r.id').select('r.id');
+  if (productId !== undefined) q.where('m.product_id', productId);
+  return ((await q) as Array<{ id: number | string }>).map((row) => Number(row.id));
+}
+
+/**
  * Visits the pack's runs in id order, one page at a time with their measurements, so memory
- * stays flat however large the pack is. `visit` may throw to stop (cancellation).
+ * stays flat however large the pack is (beyond the list of run ids). `visit` may throw to stop
+ * (cancellation).
  */
 export async function eachRunPage(
   db: Knex,
@@ -36,26 +48,25 @@ export async function eachRunPage(
   visit: (runs: PackRun[]) => Promise<void>,
 ): Promise<void> {
   const pageSize = options.pageSize ?? 500;
-  let afterId = 0;
-  for (;;) {
-    const q = packRuns(db, filter)
+  const allIds = await packRunIds(db, filter, options.productId);
+  for (let start = 0; start < allIds.length; start += pageSize) {
+    const pageIds = allIds.slice(start, start + pageSize);
+    const rows = (await db({ r: 'test_runs' })
+      .join({ m: 'motors' }, 'm.id', 'r.motor_id')
+      .join({ l: 'lots' }, 'l.id', 'm.lot_id')
+      .join({ p: 'products' }, 'p.id', 'm.product_id')
       .join({ s: 'stations' }, 's.id', 'r.station_id')
       .leftJoin({ ls: 'limit_sets' }, 'ls.id', 'r.limit_set_id')
-      .where('r.id', '>', afterId)
+      .whereIn('r.id', pageIds)
       .orderBy('r.id')
-      .limit(pageSize)
       .select(
         'r.id', 'r.run_uuid', 'm.serial', { lot: 'l.code' }, { product: 'p.code' }, 'r.attempt', 'r.started_at',
         { station: 's.code' }, 'r.calibration_due', 'r.calibration_ok', 'r.operator_badge', 'r.program_version',
         'ls.revision', 'r.verdict',
-      );
-    if (options.productId !== undefined) q.where('m.product_id', options.productId);
-    const rows = (await q) as RunRow[];
-    if (rows.length === 0) return;
-    const ids = rows.map((row) => Number(row.id));
+      )) as RunRow[];
     const measured = (await db({ ms: 'measurements' })
       .join({ c: 'characteristics' }, 'c.id', 'ms.characteristic_id')
-      .whereIn('ms.run_id', ids)
+      .whereIn('ms.run_id', pageIds)
       .orderBy([{ column: 'ms.run_id' }, { column: 'c.sort_order' }, { column: 'c.id' }])
       .select('ms.run_id', 'ms.characteristic_id', 'c.code', 'c.unit', 'ms.value', 'ms.lsl', 'ms.usl', 'ms.verdict')) as MeasurementRow[];
     const byRun = new Map<number, PackMeasurement[]>();
@@ -72,6 +83,5 @@ export async function eachRunPage(
       limitRevision: row.revision === null ? null : Number(row.revision), verdict: row.verdict,
       measurements: byRun.get(Number(row.id)) ?? [],
     })));
-    afterId = ids[ids.length - 1];
   }
 }

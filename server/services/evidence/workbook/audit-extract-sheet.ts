@@ -1,5 +1,5 @@
 import type { Knex } from 'knex';
-import { packMotors, packRuns } from '../pack-scope.js';
+import { packMotors, packRuns, packSerials } from '../pack-scope.js';
 import { RollingSheet, formats } from './rolling-sheet.js';
 import { fitCell, type SheetContext } from './pack-context.js';
 import { canonicalJson } from '../../audit/hash.js';
@@ -52,13 +52,10 @@ export async function writeAuditExtractSheet(ctx: SheetContext): Promise<void> {
   };
   const groups = await referenceEntities(ctx);
   if (groups.some(([, ids]) => ids.length > 0)) write((await eventsFor(ctx.db, groups)) as EventRow[]);
-  let after = '';
-  for (;;) {
-    const serials = ((await packMotors(ctx.db, ctx.filter).where('m.serial', '>', after).orderBy('m.serial').limit(serialPage).select('m.serial')) as Array<{ serial: string }>).map((r) => r.serial);
-    if (serials.length === 0) break;
-    write((await eventsFor(ctx.db, [['motor', serials]])) as EventRow[]);
+  const allSerials = await packSerials(ctx.db, ctx.filter);
+  for (let start = 0; start < allSerials.length; start += serialPage) {
+    write((await eventsFor(ctx.db, [['motor', allSerials.slice(start, start + serialPage)]])) as EventRow[]);
     await ctx.advance(0);
-    after = serials[serials.length - 1];
   }
   sheet.commit();
 }

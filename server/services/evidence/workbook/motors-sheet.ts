@@ -1,5 +1,5 @@
 import type { Knex } from 'knex';
-import { packMotors } from '../pack-scope.js';
+import { packSerials } from '../pack-scope.js';
 import { RollingSheet, formats } from './rolling-sheet.js';
 import type { SheetContext } from './pack-context.js';
 
@@ -29,14 +29,13 @@ export async function writeMotorsSheet(ctx: SheetContext): Promise<void> {
     { header: 'Last station', width: 14 }, { header: 'Last tested (UTC)', width: 20, numFmt: formats.dateTime },
     { header: 'Created (UTC)', width: 20, numFmt: formats.dateTime },
   ], ctx.rowCap);
-  let after = '';
-  for (;;) {
-    const rows = (await packMotors(ctx.db, ctx.filter)
+  const serials = await packSerials(ctx.db, ctx.filter);
+  for (let start = 0; start < serials.length; start += pageSize) {
+    const rows = (await ctx.db({ m: 'motors' }).join({ l: 'lots' }, 'l.id', 'm.lot_id').join({ p: 'products' }, 'p.id', 'm.product_id')
       .leftJoin({ s: 'stations' }, 's.id', 'm.last_station_id')
-      .where('m.serial', '>', after).orderBy('m.serial').limit(pageSize)
+      .whereIn('m.serial', serials.slice(start, start + pageSize)).orderBy('m.serial')
       .select('m.id', 'm.serial', { product: 'p.code' }, { lot: 'l.code' }, 'm.lot_id', 'm.status', 'm.attempts',
         { last_station: 's.code' }, 'm.last_tested_at', 'm.created_at')) as MotorRow[];
-    if (rows.length === 0) break;
     const holds = await activeHolds(ctx.db, rows.map((r) => Number(r.id)), [...new Set(rows.map((r) => Number(r.lot_id)))]);
     for (const r of rows) {
       const onHold = r.status === 'on hold' || holds.motors.has(Number(r.id)) || holds.lots.has(Number(r.lot_id));
@@ -44,7 +43,6 @@ export async function writeMotorsSheet(ctx: SheetContext): Promise<void> {
         r.last_tested_at ? new Date(r.last_tested_at) : null, new Date(r.created_at)]);
     }
     await ctx.advance(rows.length);
-    after = rows[rows.length - 1].serial;
   }
   sheet.commit();
 }
