@@ -5,7 +5,12 @@ import { rebuildSpcDisplayBlocks } from '../server/services/spc/display-blocks.j
 // the count, sums, min and max of the values stored in it. Ingest keeps it current with one
 // upsert, so a chart of a million values reads a few thousand rows instead of every value. No
 // foreign keys: like signal_points, a hot row that ingests share should not also lock its parents.
+// Outside a transaction: MariaDB commits DDL implicitly anyway, and the rebuild commits one
+// characteristic at a time. Re-running after a failed rebuild starts the summary afresh.
+export const config = { transaction: false };
+
 export async function up(knex: Knex): Promise<void> {
+  await knex.schema.dropTableIfExists('spc_display_blocks');
   await knex.schema.createTable('spc_display_blocks', (t) => {
     t.integer('characteristic_id').unsigned().notNullable();
     t.integer('block_no').unsigned().notNullable(); // FLOOR(run_id / 256)

@@ -38,7 +38,7 @@ export async function calculateLimits(
       `Not enough data for trial limits: ${groups.length} of ${needed.count} ${needed.unit}.`);
   }
   const kept = groups.filter((g) => !g.excluded);
-  const window = { points: kept.length, fromRunId: groups[0].firstRunId, toRunId: Math.max(...groups.map((g) => g.lastRunId)) };
+  const window = { points: kept.length, fromRunId: groups[0].firstRunId, toRunId: groups.reduce((last, g) => Math.max(last, g.lastRunId), 0) }; // no spread: a baseline can hold 100k+ runs
   if (isSubgroupKind(kind)) {
     if (kept.length < 2) throw invalid([{ field: 'exclusions', message: 'too many subgroups are excluded' }]);
     const chart = xbarSChart(kept.map((g) => g.values));
