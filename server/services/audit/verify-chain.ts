@@ -44,13 +44,25 @@ export async function verifyAuditChain(
   let prevHash = genesisHash;
   let lastId = 0;
   let checked = 0;
+  // .then() starts the query at once (a knex builder runs only when awaited).
+  const page = (afterId: number): Promise<AuditRow[]> => db('audit_events').where('id', '>', afterId).orderBy('id').limit(pageSize)
+    .then((rows: AuditRow[]) => rows);
+  // The next page is read while this one is hashed, so the database and the hashing overlap.
+  let pending = page(0);
   for (;;) {
-    const rows: AuditRow[] = await db('audit_events').where('id', '>', lastId).orderBy('id').limit(pageSize);
+    const rows = await pending;
     if (rows.length === 0) break;
+    pending = page(Number(rows[rows.length - 1].id));
     for (const row of rows) {
       const id = Number(row.id);
-      if (row.prev_hash !== prevHash) return { ok: false, checked, firstBrokenId: id, problem: 'link to the previous event is broken (an event before it was deleted or altered)' };
-      if (auditHash(prevHash, contentOf(row)) !== row.hash) return { ok: false, checked, firstBrokenId: id, problem: 'content does not match its hash (the event was altered)' };
+      if (row.prev_hash !== prevHash) {
+        await pending.catch(() => undefined);
+        return { ok: false, checked, firstBrokenId: id, problem: 'link to the previous event is broken (an event before it was deleted or altered)' };
+      }
+      if (auditHash(prevHash, contentOf(row)) !== row.hash) {
+        await pending.catch(() => undefined);
+        return { ok: false, checked, firstBrokenId: id, problem: 'content does not match its hash (the event was altered)' };
+      }
       prevHash = row.hash;
       lastId = id;
       checked += 1;
