@@ -1,5 +1,6 @@
 // `npm run bench`: a plant-scale benchmark in its own MariaDB (data kept in .data/bench-mariadb so
 // the generated set is reused by the next run). Prints the figures and writes bench/results/latest.json.
+import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { ensureNodeModules } from './lib/deps.mjs';
@@ -9,6 +10,19 @@ import { runNodeSync } from './lib/children.mjs';
 
 const root = resolve(fileURLToPath(new URL('..', import.meta.url)));
 const port = Number(process.env.FLUXTRAIL_BENCH_DB_PORT ?? 3309);
+// One benchmark at a time: two would share (and shut down) the same MariaDB data directory.
+const lockFile = join(root, '.data', 'bench.pid');
+if (existsSync(lockFile)) {
+  const pid = Number(readFileSync(lockFile, 'utf8'));
+  let alive = false;
+  try { process.kill(pid, 0); alive = true; } catch { /* stale lock */ }
+  if (alive) {
+    console.error(`A benchmark is already running (process ${pid}); wait for it to finish.`);
+    process.exit(1);
+  }
+}
+mkdirSync(join(root, '.data'), { recursive: true });
+writeFileSync(lockFile, String(process.pid));
 ensureNodeModules(root);
 ensureMariadbInstalled();
 const secrets = loadOrCreateSecrets(join(root, '.data', 'secrets.json'));
@@ -29,5 +43,6 @@ try {
   code = 1;
 } finally {
   await db.stop();
+  rmSync(lockFile, { force: true });
 }
 process.exit(code);
