@@ -6,17 +6,20 @@ import { medianMs, round } from './stats.js';
 
 const charted = 1_000_000;
 const topUpMarker = 'bench_spc_chart_topup';
-const topUpVersion = 'v1-C01-1M';
+const topUpVersion = 'v2-C01-1M-hashed';
 
 /**
  * C01 gets extra runs until it holds a million values: three copies of every bench run (new
- * uuid, later attempt) with a C01 value each, written by SQL once and remembered in app_meta.
+ * uuid, attempt a million later, clear of the raw-ceiling ingest's attempts), written by SQL once
+ * and remembered in app_meta. Their values follow the bench's own distribution (sum of three
+ * uniforms from hashes of the run id), so limits and rules see an in-control process.
  */
 async function topUpFirstCharacteristic(ctx: BenchContext, dataset: BenchDataset): Promise<void> {
   const marker = await ctx.db('app_meta').where({ meta_key: topUpMarker }).first();
   if (marker?.meta_value === topUpVersion) return;
   const c01 = dataset.characteristicIds[0];
-  for (let copy = 1; copy <= 3; copy++) {
+  const copies = await ctx.db('test_runs').where({ program_version: 'bench-topup' }).count({ n: '*' }).first();
+  for (let copy = 1; Number(copies?.n ?? 0) === 0 && copy <= 3; copy++) {
     ctx.log(`spc chart: topping C01 up, copy ${copy} of 3 of the bench runs…`);
     await ctx.db.raw(
       `INSERT INTO test_runs (run_uuid, motor_id, station_id, lot_id, attempt, started_at, finished_at, operator_badge, program_version,
@@ -26,17 +29,20 @@ async function topUpFirstCharacteristic(ctx: BenchContext, dataset: BenchDataset
          FROM test_runs r JOIN lots l ON l.id = r.lot_id
         WHERE l.product_id = ? AND r.program_version = 'bench-1' AND r.attempt = 1
         ORDER BY r.id`,
-      [100 * copy, copy * 20, copy * 20, dataset.productId],
+      [1_000_000 * copy, copy * 20, copy * 20, dataset.productId],
     );
   }
-  const [[{ n }]] = await ctx.db.raw('SELECT COUNT(*) AS n FROM measurements WHERE characteristic_id = ?', [c01]) as [[{ n: number }]];
+  // An earlier version of the top-up wrote other values; the copies' C01 values are written afresh.
+  await ctx.db.raw(`DELETE m FROM measurements m JOIN test_runs r ON r.id = m.run_id WHERE r.program_version = 'bench-topup' AND m.characteristic_id = ?`, [c01]);
+  const n = await countOf(ctx.db, c01);
   ctx.log(`spc chart: ${n} C01 values before the top-up; adding values for the new runs…`);
+  const uniform = (salt: string) => `CONV(SUBSTRING(MD5(CONCAT(r.id, '${salt}')), 1, 8), 16, 10) / 4294967296`;
   await ctx.db.raw(
     `INSERT INTO measurements (run_id, characteristic_id, value, lsl, usl, verdict)
-     SELECT r.id, ?, ROUND(100 + ((r.id * 7919) % 4001) / 1000 - 2 + SIN(r.id / 5000), 3), 90, 110, 'pass'
+     SELECT r.id, ?, ROUND(100 + (${uniform('a')} + ${uniform('b')} + ${uniform('c')} - 1.5) * 4, 3), 90, 110, 'pass'
        FROM test_runs r WHERE r.program_version = 'bench-topup'
-      LIMIT ?`,
-    [c01, Math.max(0, charted - Number(n))],
+      ORDER BY r.id LIMIT ?`,
+    [c01, Math.max(0, charted - n)],
   );
   await ctx.db('app_meta').insert({ meta_key: topUpMarker, meta_value: topUpVersion, updated_at: new Date() }).onConflict('meta_key').merge();
 }
