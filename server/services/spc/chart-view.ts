@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
-import { ruleViolations, type RuleName } from '../../analysis/spc/index.js';
+import { ewmaChart, ruleViolations, type RuleName } from '../../analysis/spc/index.js';
+import { ewmaDefaults } from './chart-kinds.js';
 import { notFound } from '../../errors.js';
 import { currentLimitsOf, type ControlLimitView } from './control-limit-rows.js';
 import { describeSignalRule, isSignalRule } from './describe-signal-rule.js';
@@ -17,6 +18,19 @@ function marks(values: readonly SeriesValue[], limits: ControlLimitView | null) 
   const rules = limits.rules as RuleName[];
   return ruleViolations(values.map((v) => v.value), { center: limits.centre, sigma: limits.sigma }, rules)
     .map((v) => ({ runId: values[v.index].runId, value: values[v.index].value, rule: v.rule, ruleText: describeSignalRule(v.rule) }));
+}
+
+/**
+ * The EWMA statistic over the exact points sent, for an EWMA chart: its limits apply to z, not to
+ * the raw values. For display only, z starts at the centre with the first point sent; Phase II
+ * judges every value with z carried since the freeze (phase-two-step.ts).
+ */
+function ewmaDisplay(values: readonly SeriesValue[], limits: ControlLimitView | null) {
+  if (!limits || limits.chartKind !== 'ewma' || values.length === 0) return [];
+  const lambda = limits.params.lambda ?? ewmaDefaults.lambda;
+  const L = limits.params.L ?? ewmaDefaults.L;
+  const chart = ewmaChart(values.map((v) => v.value), { lambda, L, target: limits.centre, sigma: limits.sigma });
+  return chart.points.map((p, i) => ({ runId: values[i].runId, z: p.z }));
 }
 
 type SignalRow = { id: number; rule: string; first_run_id: number | string; status: string; value: number | null };
@@ -48,6 +62,7 @@ export async function chartView(db: Knex, characteristicId: number, window: { fr
     spec,
     ...series,
     violations: marks(series.points, limits.frozen ?? limits.trial),
+    ewma: ewmaDisplay(series.points, limits.frozen ?? limits.trial),
     signals,
   };
 }

@@ -23,6 +23,8 @@ export const chartSchema = z.object({
   points: z.array(z.object({ runId: z.number(), value: z.number() })),
   buckets: z.array(z.object({ fromRunId: z.number(), toRunId: z.number(), min: z.number(), max: z.number(), mean: z.number(), n: z.number() })),
   violations: z.array(z.object({ runId: z.number(), value: z.number(), rule: z.string(), ruleText: z.string() })),
+  /** For an EWMA chart: the smoothed statistic its limits apply to. */
+  ewma: z.array(z.object({ runId: z.number(), z: z.number() })).default([]),
   signals: z.array(z.object({ id: z.number(), rule: z.string(), runId: z.number(), status: z.string(), value: z.number().nullable(), ruleText: z.string() })),
 });
 export type ChartData = z.infer<typeof chartSchema>;

@@ -1,7 +1,7 @@
 import type { ChartData, Limits } from '../api/spc-schemas';
 import type { SpcChartOption } from './ControlChart';
 
-const ink = { value: '#3b4350', limit: '#b5512a', centre: '#2f7d4f', spec: '#6b4e00', mark: '#c42b2f' };
+const ink = { value: '#3b4350', faint: '#a3a9b2', ewma: '#b8733a', limit: '#b5512a', centre: '#2f7d4f', spec: '#6b4e00', mark: '#c42b2f' };
 
 type Line = { name: string; yAxis: number; color: string; dashed?: boolean };
 
@@ -29,6 +29,9 @@ export function controlChartOption(data: ChartData, showSpec: boolean): SpcChart
     ...data.buckets.flatMap((b) => [[b.fromRunId, b.min], [b.toRunId, b.max]] as Array<[number, number]>),
     ...data.points.map((p): [number, number] => [p.runId, p.value]),
   ];
+  // On an EWMA chart the limits bound the smoothed statistic, so the raw values recede behind it.
+  const smoothed = data.ewma.length > 0;
+  const valueColour = smoothed ? ink.faint : ink.value;
   return {
     animation: false,
     grid: { left: 64, right: 96, top: 24, bottom: 64 },
@@ -39,7 +42,7 @@ export function controlChartOption(data: ChartData, showSpec: boolean): SpcChart
     series: [
       {
         type: 'line', name: data.characteristic.name, data: series, showSymbol: !data.sampled, symbolSize: 4,
-        lineStyle: { color: ink.value, width: 1 }, itemStyle: { color: ink.value },
+        lineStyle: { color: valueColour, width: 1 }, itemStyle: { color: valueColour },
         markLine: {
           symbol: 'none', silent: true,
           data: limitLines(limits, data.spec, showSpec).map((l) => ({
@@ -47,6 +50,10 @@ export function controlChartOption(data: ChartData, showSpec: boolean): SpcChart
           })),
         },
       },
+      ...(smoothed ? [{
+        type: 'line' as const, name: 'EWMA statistic', data: data.ewma.map((p): [number, number] => [p.runId, p.z]),
+        showSymbol: false, lineStyle: { color: ink.ewma, width: 2 }, itemStyle: { color: ink.ewma },
+      }] : []),
       {
         type: 'scatter', name: 'Rule broken', symbol: 'diamond', symbolSize: 11, itemStyle: { color: ink.mark },
         data: data.violations.map((v) => ({ value: [v.runId, v.value], name: `${v.rule}: ${v.ruleText}` })),
