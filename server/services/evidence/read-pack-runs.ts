@@ -21,9 +21,16 @@ type RunRow = {
 };
 
 type MeasurementRow = {
-  run_id: number | string; characteristic_id: number; code: string; unit: string;
+  run_id: number | string; characteristic_id: number;
   value: number; lsl: number | null; usl: number | null; verdict: string;
 };
+
+type CharacteristicFacts = { code: string; unit: string; sortOrder: number };
+
+async function characteristicsById(db: Knex): Promise<Map<number, CharacteristicFacts>> {
+  const rows = (await db('characteristics').select('id', 'code', 'unit', 'sort_order')) as Array<{ id: number; code: string; unit: string; sort_order: number }>;
+  return new Map(rows.map((c) => [Number(c.id), { code: c.code, unit: c.unit, sortOrder: Number(c.sort_order) }]));
+}
 
 /**
  * The pack's run ids in order, read once. Paging the filtered join itself ("id > last ORDER BY id
@@ -49,6 +56,9 @@ export async function eachRunPage(
 ): Promise<void> {
   const pageSize = options.pageSize ?? 500;
   const allIds = await packRunIds(db, filter, options.productId);
+  const characteristics = await characteristicsById(db);
+  // Test-plan order: sort_order, then id.
+  const order = (id: number) => { const c = characteristics.get(id); return c ? c.sortOrder * 1e9 + id : id; };
   for (let start = 0; start < allIds.length; start += pageSize) {
     const pageIds = allIds.slice(start, start + pageSize);
     const rows = (await db({ r: 'test_runs' })
@@ -64,17 +74,19 @@ export async function eachRunPage(
         { station: 's.code' }, 'r.calibration_due', 'r.calibration_ok', 'r.operator_badge', 'r.program_version',
         'ls.revision', 'r.verdict',
       )) as RunRow[];
-    const measured = (await db({ ms: 'measurements' })
-      .join({ c: 'characteristics' }, 'c.id', 'ms.characteristic_id')
-      .whereIn('ms.run_id', pageIds)
-      .orderBy([{ column: 'ms.run_id' }, { column: 'c.sort_order' }, { column: 'c.id' }])
-      .select('ms.run_id', 'ms.characteristic_id', 'c.code', 'c.unit', 'ms.value', 'ms.lsl', 'ms.usl', 'ms.verdict')) as MeasurementRow[];
+    // By primary key only: joined with characteristics, MariaDB drives from that small table and
+    // walks each characteristic's whole series in the (characteristic_id, run_id) index instead.
+    const measured = (await db('measurements').whereIn('run_id', pageIds)
+      .select('run_id', 'characteristic_id', 'value', 'lsl', 'usl', 'verdict')) as MeasurementRow[];
     const byRun = new Map<number, PackMeasurement[]>();
     for (const m of measured) {
+      const characteristic = characteristics.get(Number(m.characteristic_id));
+      if (!characteristic) throw new Error(`measurement of unknown characteristic ${m.characteristic_id}`);
       const list = byRun.get(Number(m.run_id)) ?? [];
-      list.push({ characteristicId: Number(m.characteristic_id), code: m.code, unit: m.unit, value: Number(m.value), lsl: m.lsl, usl: m.usl, verdict: m.verdict });
+      list.push({ characteristicId: Number(m.characteristic_id), code: characteristic.code, unit: characteristic.unit, value: Number(m.value), lsl: m.lsl, usl: m.usl, verdict: m.verdict });
       byRun.set(Number(m.run_id), list);
     }
+    for (const list of byRun.values()) list.sort((a, b) => order(a.characteristicId) - order(b.characteristicId));
     await visit(rows.map((row) => ({
       id: Number(row.id), uuid: row.run_uuid, serial: row.serial, lot: row.lot, product: row.product,
       attempt: Number(row.attempt), startedAt: new Date(row.started_at), station: row.station,
