@@ -31,6 +31,9 @@ export async function benchIngest(ctx: BenchContext, dataset: BenchDataset, tag:
     if (response.status !== 201) throw new Error(`ingest answered ${response.status}: ${await response.text()}`);
   };
 
+  // An uncounted warm-up round first, so the figure is the steady state, not JIT and cold caches.
+  ctx.log('ingest: warm-up round…');
+  await runPool(300, concurrentStations, (i) => post(i, `${tag}2`));
   ctx.log(`ingest: ${runsPerMeasurement} runs through the API, ${concurrentStations} concurrent…`);
   let start = performance.now();
   await runPool(runsPerMeasurement, concurrentStations, (i) => post(i, `${tag}0`));
