@@ -6,7 +6,7 @@ import { percentile, round, runPool } from './stats.js';
 const runsPerMeasurement = 2000;
 const concurrentStations = 16;
 
-function runDocument(serial: string, stationCode: string, lotCode: string, startedAt: Date) {
+export function runDocument(serial: string, stationCode: string, lotCode: string, startedAt: Date) {
   return {
     runId: randomUUID(), serial, product: benchProductCode, station: stationCode, lot: lotCode,
     startedAt: startedAt.toISOString(), finishedAt: new Date(startedAt.getTime() + 1000).toISOString(),

@@ -12,6 +12,7 @@ import { benchAnalysis } from './analysis.js';
 import { benchYield } from './yield.js';
 import { benchSpcChart } from './spc-chart.js';
 import { benchIngestWithRules } from './spc-ingest.js';
+import { benchIngestWithWaveforms } from './ingest-waveforms.js';
 
 const log = (line: string) => console.log(`[bench] ${line}`);
 const wanted = process.argv.slice(2);
@@ -22,6 +23,7 @@ const results: Record<string, unknown> = { ...previous, machine: { cores: 2, nod
 type Section = { name: string; key: string; run: (ctx: BenchContext, dataset: BenchDataset) => Promise<unknown> };
 const sections: Section[] = [
   { name: 'ingest', key: 'ingest', run: (ctx, dataset) => benchIngest(ctx, dataset, String(25 + (Date.now() % 75))) },
+  { name: 'ingest-waveforms', key: 'ingestWithWaveforms', run: benchIngestWithWaveforms },
   { name: 'analysis', key: 'analysis', run: async () => ({ ...(await benchAnalysis()), target: '≤ 20 ms for analyzeBackEmf' }) },
   { name: 'spc', key: 'spcRules', run: () => benchSpcRules() },
   { name: 'spc-chart', key: 'spcChart', run: benchSpcChart },
