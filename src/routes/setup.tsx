@@ -6,6 +6,8 @@ import { SetupTabs, setupSections, type SetupSectionId } from '../features/setup
 import { StationClientsSection } from '../features/setup/components/StationClientsSection';
 import { StationsSection } from '../features/setup/components/StationsSection';
 import { ResultUploadsSection } from '../features/uploads/components/ResultUploadsSection';
+import { ShiftCalendarSection } from '../features/setup/components/ShiftCalendarSection';
+import { useCan } from '../features/auth/use-can';
 
 const isSection = (value: string | null): value is SetupSectionId => setupSections.some((s) => s.id === value);
 
@@ -22,6 +24,7 @@ export default function SetupRoute() {
       return next;
     });
   const selectProduct = (code: string) => update({ product: code });
+  const canEditShifts = useCan('stations:manage');
 
   return (
     <section>
@@ -33,6 +36,7 @@ export default function SetupRoute() {
         {section === 'stations' ? <StationsSection /> : null}
         {section === 'clients' ? <StationClientsSection /> : null}
         {section === 'uploads' ? <ResultUploadsSection /> : null}
+        {section === 'shifts' ? <ShiftCalendarSection canEdit={canEditShifts} /> : null}
       </div>
     </section>
   );

@@ -1,24 +1,12 @@
 import type { Knex } from 'knex';
-import { z } from 'zod';
 import { invalid } from '../../errors.js';
 import { recordAudit, type Actor } from '../audit/record-audit.js';
-import { isKnownTimeZone } from './plant-time.js';
 import { readShiftCalendar, type ShiftCalendar } from './shift-calendar.js';
 import { refileYieldRollups } from './recompute-shift-slots.js';
 
-const clock = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'must be HH:MM from 00:00 to 23:59, e.g. 06:00');
+import { shiftCalendarBodySchema, type ShiftCalendarBody } from '../../schemas/shift-calendar.js';
 
-export const shiftCalendarBodySchema = z.strictObject({
-  timeZone: z.string().trim().min(1).max(64).refine(isKnownTimeZone, 'must be an IANA time zone such as Europe/Berlin or UTC'),
-  firstPassTarget: z.number().gt(0, 'must be above 0').max(1, 'must be at most 1 (100 %)'),
-  shifts: z.array(z.strictObject({
-    code: z.string().trim().regex(/^[a-z0-9-]{1,16}$/, 'must be 1–16 lower-case letters, digits or dashes'),
-    name: z.string().trim().min(1).max(64),
-    startsAt: clock,
-  })).min(1, 'give at least one shift').max(6, 'give at most six shifts'),
-  reason: z.string().trim().min(3, 'say why, in at least 3 characters').max(1000),
-}).meta({ id: 'ShiftCalendarBody' });
-export type ShiftCalendarBody = z.infer<typeof shiftCalendarBodySchema>;
+export { shiftCalendarBodySchema, type ShiftCalendarBody };
 
 const minutesOf = (clockTime: string) => Number(clockTime.slice(0, 2)) * 60 + Number(clockTime.slice(3, 5));
 export const clockOf = (minutes: number) => `${String(Math.floor(minutes / 60)).padStart(2, '0')}:${String(minutes % 60).padStart(2, '0')}`;

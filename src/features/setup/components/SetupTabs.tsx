@@ -6,6 +6,7 @@ export const setupSections = [
   { id: 'stations', label: 'Stations & calibration' },
   { id: 'clients', label: 'Station clients' },
   { id: 'uploads', label: 'Result uploads' },
+  { id: 'shifts', label: 'Shift calendar' },
 ] as const;
 export type SetupSectionId = (typeof setupSections)[number]['id'];
 
