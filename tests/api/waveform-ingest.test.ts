@@ -10,7 +10,7 @@ import { clientToken, signIn } from '../support/sign-in.js';
 import { idpUrl } from '../support/ports.js';
 import { canonicalBytes, syntheticSpin } from '../support/synthetic-back-emf.js';
 import type { RunningServer } from '../../server/index.js';
-import { parseJson } from '../../server/services/motors/motor-runs.js';
+import { jsonColumn } from '../../server/db/json-column.js';
 import { createLimitSet, createLot, createProduct, createStation, runDocument, type CharacteristicSpec, type PlantFixture } from '../factories.js';
 
 // The PM-150 demo product's derived codes (seeds/demo/products.ts) with its revision-1 limits.
@@ -96,10 +96,10 @@ describe('waveform ingest: derived back-EMF, resolver and readings, blob store a
     expect(await server.db('measurements').where({ run_id: run.id }).count({ n: '*' })).toEqual([{ n: pmCharacteristics.length }]);
     const stored = await server.db('waveforms').where({ run_id: run.id }).first();
     expect(stored).toMatchObject({ kind: 'back-emf', sample_rate_hz: 20_000, speed_rpm: 1000, samples_per_channel: 4096 });
-    expect(parseJson(stored.summary_json)).toMatchObject({ sequence: 'UVW', polePairsFromFrequency: 4, resolver: { resolverPolePairs: 4 } });
+    expect(jsonColumn(stored.summary_json)).toMatchObject({ sequence: 'UVW', polePairsFromFrequency: 4, resolver: { resolverPolePairs: 4 } });
     const kept = await server.db('raw_readings').where({ run_id: run.id }).orderBy('kind').select('kind', 'reading_json');
     expect(kept.map((r) => r.kind)).toEqual(['hipot', 'insulation', 'winding-resistance']);
-    expect(parseJson(kept[0].reading_json)).toEqual({ voltageV: 1800, leakageMa: 1.2, durationS: 1, acOrDc: 'ac' });
+    expect(jsonColumn(kept[0].reading_json)).toEqual({ voltageV: 1800, leakageMa: 1.2, durationS: 1, acOrDc: 'ac' });
 
     const sha = stored.blob_sha256 as string;
     const expected = canonicalBytes([waveform.lineToLineV.uv, waveform.lineToLineV.vw, waveform.lineToLineV.wu, waveform.resolverAngleDeg]);

@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { jsonColumn } from '../../db/json-column.js';
 
 export type AuditEventFilter = {
   entityType?: string;
@@ -31,11 +32,6 @@ type Row = {
   reason: string | null; hash: string;
 };
 
-/** mysql2 hands a JSON column back parsed or as text, depending on how MariaDB reports its type. */
-function parseJson(value: unknown): unknown {
-  return typeof value === 'string' ? JSON.parse(value) : value ?? null;
-}
-
 export function toAuditEventView(row: Row): AuditEventView {
   return {
     id: Number(row.id),
@@ -45,8 +41,8 @@ export function toAuditEventView(row: Row): AuditEventView {
     action: row.action,
     entityType: row.entity_type,
     entityId: row.entity_id,
-    before: parseJson(row.before_json),
-    after: parseJson(row.after_json),
+    before: jsonColumn(row.before_json),
+    after: jsonColumn(row.after_json),
     reason: row.reason,
     hash: row.hash,
   };

@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { jsonColumn } from '../../db/json-column.js';
 import { auditHash, genesisHash, type AuditContent } from './hash.js';
 
 export type ChainVerdict = { ok: boolean; checked: number; firstBrokenId?: number; problem?: string };
@@ -9,11 +10,6 @@ type AuditRow = {
   reason: string | null; prev_hash: string; hash: string;
 };
 
-/** mysql2 hands a JSON column back parsed or as text, depending on how MariaDB reports its type. */
-function jsonValue(value: unknown): unknown {
-  return typeof value === 'string' ? JSON.parse(value) : value ?? null;
-}
-
 function contentOf(row: AuditRow): AuditContent {
   return {
     occurredAt: new Date(row.occurred_at).toISOString(),
@@ -22,8 +18,8 @@ function contentOf(row: AuditRow): AuditContent {
     action: row.action,
     entityType: row.entity_type,
     entityId: row.entity_id,
-    before: jsonValue(row.before_json),
-    after: jsonValue(row.after_json),
+    before: jsonColumn(row.before_json),
+    after: jsonColumn(row.after_json),
     reason: row.reason,
   };
 }

@@ -1,5 +1,5 @@
 import type { Knex } from 'knex';
-import { parseJson } from './motor-runs.js';
+import { jsonColumn } from '../../db/json-column.js';
 
 export type AuditEventView = {
   id: number; occurredAt: string; actor: string; actorRole: string | null; action: string;
@@ -15,6 +15,6 @@ export async function auditEventsOf(db: Knex, entities: ReadonlyArray<{ type: st
     .orderBy('id', 'asc').limit(limit);
   return rows.map((r) => ({
     id: Number(r.id), occurredAt: r.occurred_at.toISOString(), actor: r.actor, actorRole: r.actor_role, action: r.action,
-    entityType: r.entity_type, entityId: r.entity_id, before: parseJson(r.before_json), after: parseJson(r.after_json), reason: r.reason,
+    entityType: r.entity_type, entityId: r.entity_id, before: jsonColumn(r.before_json), after: jsonColumn(r.after_json), reason: r.reason,
   }));
 }

@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { jsonColumn } from '../../db/json-column.js';
 
 export type RunResultView = {
   characteristic: string; name: string; unit: string; testStep: string;
@@ -45,12 +46,7 @@ export async function runsOfMotor(db: Knex, motorId: number): Promise<RunView[]>
       characteristic: r.code, name: r.name, unit: r.unit, testStep: r.test_step,
       value: r.value, lsl: r.lsl, nominal: r.nominal, usl: r.usl, verdict: r.verdict,
     })),
-    waveforms: waveforms.filter((w) => w.run_id === run.id).map((w) => ({ kind: w.kind, summary: parseJson(w.summary_json) })),
-    readings: readings.filter((r) => r.run_id === run.id).map((r) => ({ kind: r.kind, reading: parseJson(r.reading_json) })),
+    waveforms: waveforms.filter((w) => w.run_id === run.id).map((w) => ({ kind: w.kind, summary: jsonColumn(w.summary_json) })),
+    readings: readings.filter((r) => r.run_id === run.id).map((r) => ({ kind: r.kind, reading: jsonColumn(r.reading_json) })),
   }));
-}
-
-/** MariaDB's JSON is LONGTEXT on the wire. */
-export function parseJson(value: unknown): unknown {
-  return typeof value === 'string' ? JSON.parse(value) : value;
 }

@@ -1,3 +1,4 @@
+import { jsonColumn } from '../../db/json-column.js';
 import { createHash } from 'node:crypto';
 import type { Knex } from 'knex';
 import { conflict } from '../../errors.js';
@@ -21,6 +22,5 @@ export async function answerForRetry(db: Knex, runId: string, sha256: string): P
   if (stored.body_sha256 !== sha256) {
     throw conflict(`Run ${runId} was already received with a different body; a new run needs a new runId.`, [{ field: 'runId', message: 'already used for a different run' }]);
   }
-  const body = typeof stored.response_json === 'string' ? JSON.parse(stored.response_json) : stored.response_json;
-  return { status: 200, body: body as TestRunResponse };
+  return { status: 200, body: jsonColumn<TestRunResponse>(stored.response_json) };
 }

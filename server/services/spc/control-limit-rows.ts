@@ -1,3 +1,4 @@
+import { jsonColumn } from '../../db/json-column.js';
 import type { Knex } from 'knex';
 import { notFound } from '../../errors.js';
 import type { ChartKind, ChartParams, FrozenLimits, SignalRule } from './chart-kinds.js';
@@ -12,7 +13,7 @@ export type ControlLimitRow = {
 
 type ExclusionRow = { run_id: number | string | null; lot_id: number | null; reason: string; excluded_by: string; excluded_at: Date };
 
-const parsed = <T>(value: string | T): T => (typeof value === 'string' ? JSON.parse(value) as T : value);
+const parsed = <T>(value: string | T): T => jsonColumn<T>(value);
 
 export async function findLimitRow(db: Knex, id: number, options: { lock?: boolean } = {}): Promise<ControlLimitRow> {
   const query = db<ControlLimitRow>('control_limits').where({ id });

@@ -1,3 +1,4 @@
+import { jsonColumn } from '../../db/json-column.js';
 import type { Knex } from 'knex';
 import { openSignal } from '../signals/open-signal.js';
 import { recordDisplayBlocks } from './display-blocks.js';
@@ -45,7 +46,7 @@ async function judgeAgainstFrozenLimits(trx: Knex.Transaction, run: IngestedRun,
   const continued: Array<{ signal_id: number; run_id: number }> = [];
   const updates = [];
   for (const row of rows) {
-    const state: SpcStateData = typeof row.state_json === 'string' ? JSON.parse(row.state_json) : row.state_json;
+    const state = jsonColumn<SpcStateData>(row.state_json);
     const step = phaseTwoStep(state, { runId: run.runId, lotId: run.lotId, value: values.get(row.characteristic_id) as number });
     const next = step.state;
     if (step.judged) {

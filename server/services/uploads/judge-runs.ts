@@ -1,3 +1,4 @@
+import { jsonColumn } from '../../db/json-column.js';
 import type { Knex } from 'knex';
 import { AppError } from '../../errors.js';
 import type { TestRunDocument, TestRunResponse, Verdict } from '../../schemas/test-run.js';
@@ -42,7 +43,7 @@ export async function checkRuns(db: Knex, chunk: PreparedRun[], now: Date): Prom
       const existing = byId.get(document.runId);
       if (existing && existing.body_sha256 !== bodySha256(document)) { outcomes.push(invalid(prepared, [{ row: run.firstRow, column: '(run)', message: storedElsewhere }])); continue; }
       if (existing) {
-        const answer = (typeof existing.response_json === 'string' ? JSON.parse(existing.response_json) : existing.response_json) as TestRunResponse;
+        const answer = jsonColumn<TestRunResponse>(existing.response_json);
         outcomes.push({ prepared, outcome: 'duplicate', verdict: answer.verdict, problems: [] });
         continue;
       }

@@ -2,7 +2,7 @@ import type { Knex } from 'knex';
 import { BlobNotFoundError, type BlobStore } from '../../blob-store/blob-store.js';
 import { HIGHEST_HARMONIC } from '../../analysis/index.js';
 import { notFound } from '../../errors.js';
-import { parseJson } from '../motors/motor-runs.js';
+import { jsonColumn } from '../../db/json-column.js';
 import { BACK_EMF_CHANNELS, decodeChannels } from './sample-bytes.js';
 import { MAX_DISPLAY_POINTS, minMaxEnvelope } from './display-samples.js';
 
@@ -35,7 +35,7 @@ export async function getWaveformDisplay(db: Knex, blobs: BlobStore, where: { se
     throw error instanceof BlobNotFoundError ? notFound(`The raw samples of this ${where.kind} waveform (${row.blob_sha256}) are not in the blob store.`) : error;
   });
   const channels = decodeChannels(bytes, row.samples_per_channel);
-  const summary = parseJson(row.summary_json) as { harmonicsPercent?: Record<Line, Record<string, number>> };
+  const summary = jsonColumn<{ harmonicsPercent?: Record<Line, Record<string, number>> }>(row.summary_json);
   const envelope = (line: Line) => minMaxEnvelope(channels[BACK_EMF_CHANNELS.indexOf(line)], row.sample_rate_hz);
   return {
     kind: row.kind, sampleRateHz: row.sample_rate_hz, speedRpm: row.speed_rpm, samplesPerChannel: row.samples_per_channel,
