@@ -3,34 +3,13 @@
  * the argument and the reason, so a bad test record points at its own field.
  */
 
+import { requireFinite } from '../require-number.js';
+
+export { requireFinite, requireNonNegative, requirePositive, requirePositiveInteger } from '../require-number.js';
+
 /** Winding temperatures outside this span are sensor faults, not test conditions (common practice). */
 export const MIN_TEMPERATURE_C = -40;
 export const MAX_TEMPERATURE_C = 200;
-
-export function requireFinite(name: string, value: number): number {
-  if (typeof value !== 'number' || !Number.isFinite(value)) {
-    throw new Error(`${name} must be a finite number, got ${String(value)}`);
-  }
-  return value;
-}
-
-export function requireNonNegative(name: string, value: number): number {
-  requireFinite(name, value);
-  if (value < 0) throw new Error(`${name} must not be negative, got ${value}`);
-  return value;
-}
-
-export function requirePositive(name: string, value: number): number {
-  requireFinite(name, value);
-  if (value <= 0) throw new Error(`${name} must be greater than zero, got ${value}`);
-  return value;
-}
-
-export function requirePositiveInteger(name: string, value: number): number {
-  requirePositive(name, value);
-  if (!Number.isInteger(value)) throw new Error(`${name} must be a whole number, got ${value}`);
-  return value;
-}
 
 export function requireTemperatureC(name: string, value: number): number {
   requireFinite(name, value);

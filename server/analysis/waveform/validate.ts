@@ -6,20 +6,7 @@
 /** Samples as a test stand sends them: a plain array or a typed array of volts or degrees. */
 export type Samples = readonly number[] | Float64Array;
 
-/** A finite number above zero, or an Error naming the argument. */
-export function requirePositive(name: string, value: number): number {
-  if (typeof value !== 'number' || !Number.isFinite(value) || value <= 0) {
-    throw new Error(`${name} must be a finite number greater than zero, got ${String(value)}`);
-  }
-  return value;
-}
-
-/** A whole number above zero, or an Error naming the argument. */
-export function requirePositiveInteger(name: string, value: number): number {
-  requirePositive(name, value);
-  if (!Number.isInteger(value)) throw new Error(`${name} must be a whole number, got ${value}`);
-  return value;
-}
+export { requirePositive, requirePositiveInteger } from '../require-number.js';
 
 /**
  * Samples as a Float64Array after checking that every one is a finite number. A Float64Array is
