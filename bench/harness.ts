@@ -12,8 +12,9 @@ export type BenchContext = {
   stop(): Promise<void>;
 };
 
-const appPort = 3130;
-const idpPort = 3131;
+// FLUXTRAIL_BENCH_PORT_BASE moves both, so a second checkout can benchmark beside this one.
+const appPort = Number(process.env.FLUXTRAIL_BENCH_PORT_BASE ?? 3130);
+const idpPort = appPort + 1;
 
 async function waitForHealth(url: string, child: ChildProcess): Promise<void> {
   for (let i = 0; i < 300; i++) {

@@ -18,6 +18,8 @@ const port = Number(process.env.FLUXTRAIL_TEST_DB_PORT ?? 3308);
 ensureNodeModules(root);
 ensureMariadbInstalled();
 ensureDebianPackage('/usr/bin/chromium', 'chromium');
+// The evidence-pack tests open generated workbooks with LibreOffice, a reader independent of exceljs.
+ensureDebianPackage('/usr/bin/libreoffice', 'libreoffice-calc-nogui', { withRecommends: false });
 
 const baseDir = mkdtempSync(join(tmpdir(), 'fluxtrail-test-db-'));
 const password = randomBytes(12).toString('base64url');

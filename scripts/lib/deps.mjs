@@ -17,8 +17,11 @@ export function ensureNodeModules(root) {
   execFileSync('npm', args, { cwd: root, stdio: 'inherit' });
 }
 
-/** Installs a Debian package when a binary it provides is missing (as root), or stops with a message. */
-export function ensureDebianPackage(binary, pkg) {
+/**
+ * Installs a Debian package when a binary it provides is missing (as root), or stops with a message.
+ * `withRecommends: false` keeps large suites (LibreOffice) to what the binary needs.
+ */
+export function ensureDebianPackage(binary, pkg, { withRecommends = true } = {}) {
   if (existsSync(binary)) return;
   if (process.getuid?.() !== 0) {
     console.error(`${binary} is missing. Install it with: sudo apt-get install ${pkg}`);
@@ -28,5 +31,5 @@ export function ensureDebianPackage(binary, pkg) {
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
   const update = spawnSync('apt-get', ['update', '-qq'], { stdio: 'inherit', env });
   if (update.status !== 0) throw new Error('apt-get update failed');
-  execFileSync('apt-get', ['install', '-y', '-qq', pkg], { stdio: 'inherit', env });
+  execFileSync('apt-get', ['install', '-y', '-qq', ...(withRecommends ? [] : ['--no-install-recommends']), pkg], { stdio: 'inherit', env });
 }
