@@ -29,6 +29,9 @@ export default defineConfig({
           name: 'browser',
           include: ['tests/browser/**/*.test.ts'],
           environment: 'node',
+          // A sign-in is several redirects and a page load: on a busy 2-core machine that can take
+          // longer than expect.poll's default second.
+          expect: { poll: { timeout: 15_000 } },
           globalSetup: ['tests/browser/global-setup.ts'],
           fileParallelism: false,
           testTimeout: 90_000,
