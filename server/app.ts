@@ -34,7 +34,9 @@ export function buildApp({ config, db }: AppDeps) {
     },
     strictTransportSecurity: config.publicUrl.startsWith('https://'),
   }));
-  app.use(sessionMiddleware(db, config.sessionSecret, config.publicUrl.startsWith('https://')));
+  const sessions = sessionMiddleware(db, config.sessionSecret, config.publicUrl.startsWith('https://'));
+  // A bearer-token call (a station, an integration) is never a browser session: no session work.
+  app.use((req, res, next) => (req.get('authorization') ? next() : sessions(req, res, next)));
   app.use('/auth', authRouter(config, db, oidc));
   app.use('/api', resolvePrincipal(createBearerVerifier(config, oidc)), csrfProtection([new URL(config.publicUrl).origin]));
   app.use('/api', apiRouter({ config, db }));
