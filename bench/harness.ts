@@ -42,7 +42,9 @@ export async function startBenchApp(log: (line: string) => void): Promise<BenchC
   };
   const db = createDb(loadConfig(env).db);
   await db.migrate.latest();
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], { env, stdio: ['ignore', 'ignore', 'inherit'] });
+  // FLUXTRAIL_BENCH_NODE_ARGS adds flags to the app's processes, e.g. "--cpu-prof --cpu-prof-dir=.data/prof".
+  const nodeArgs = (process.env.FLUXTRAIL_BENCH_NODE_ARGS ?? '').split(' ').filter(Boolean);
+  const child = spawn(process.execPath, [...nodeArgs, '--import', 'tsx', 'server/index.ts'], { env, stdio: ['ignore', 'ignore', 'inherit'] });
   const url = `http://127.0.0.1:${appPort}`;
   await waitForHealth(url, child);
   return {

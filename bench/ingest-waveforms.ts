@@ -1,4 +1,5 @@
 import { syntheticSpin } from '../tests/support/synthetic-back-emf.js';
+import { connectStands, httpRequest } from './http-client.js';
 import type { BenchDataset } from './dataset.js';
 import { clientToken, type BenchContext } from './harness.js';
 import { runDocument } from './ingest.js';
@@ -20,12 +21,11 @@ export async function benchIngestWithWaveforms(ctx: BenchContext, dataset: Bench
   const spin = syntheticSpin({ sampleRateHz: 20_000, speedRpm: 1000, polePairs: 4, samples: 4096, harmonicsPeakV: { 1: 68, 5: 2, 7: 1 }, resolverOffsetDeg: 12 });
   const tag = String(25 + (Date.now() % 75));
   const base = Date.now() - 3_600_000;
-  const post = async (i: number) => {
+  const stands = await connectStands(ctx.app.url, concurrentStations);
+  const post = async (i: number, lane: number) => {
     const document = { ...runDocument(`BX${tag}3-${String(i).padStart(5, '0')}`, station.code, lot.code, new Date(base + i)), waveforms: [spin] };
-    const response = await fetch(`${ctx.app.url}/api/v1/test-runs`, {
-      method: 'POST', headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' }, body: JSON.stringify(document),
-    });
-    if (response.status !== 201) throw new Error(`ingest with a waveform answered ${response.status}: ${await response.text()}`);
+    const response = await httpRequest(`${ctx.app.url}/api/v1/test-runs`, { token, json: document, agent: stands[lane] });
+    if (response.status !== 201) throw new Error(`ingest with a waveform answered ${response.status}: ${response.body}`);
   };
   ctx.log(`ingest with waveforms: ${runs} runs, ${concurrentStations} concurrent…`);
   const start = performance.now();

@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { benchCharacteristicCode, benchProductCode, type BenchDataset } from './dataset.js';
 import { clientToken, type BenchContext } from './harness.js';
 import { percentile, round, runPool } from './stats.js';
+import { connectStands, httpRequest } from './http-client.js';
 
 const runsPerMeasurement = 2000;
 const concurrentStations = 16;
@@ -23,20 +24,19 @@ export async function benchIngest(ctx: BenchContext, dataset: BenchDataset, tag:
   const token = await clientToken(ctx.idpUrl, 'demo-station', 'demo-station-secret', 'test-runs:write');
   const readToken = await clientToken(ctx.idpUrl, 'demo-integration', 'demo-integration-secret', 'records:read');
   const base = Date.now() - 3_600_000;
-  const post = async (i: number, prefix: string) => {
+  let stands = await connectStands(ctx.app.url, concurrentStations);
+  const post = async (i: number, prefix: string, lane: number) => {
     const document = runDocument(`BX${prefix}-${String(i).padStart(5, '0')}`, station.code, lot.code, new Date(base + i));
-    const response = await fetch(`${ctx.app.url}/api/v1/test-runs`, {
-      method: 'POST', headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' }, body: JSON.stringify(document),
-    });
-    if (response.status !== 201) throw new Error(`ingest answered ${response.status}: ${await response.text()}`);
+    const response = await httpRequest(`${ctx.app.url}/api/v1/test-runs`, { token, json: document, agent: stands[lane] });
+    if (response.status !== 201) throw new Error(`ingest answered ${response.status}: ${response.body}`);
   };
 
   // An uncounted warm-up round first, so the figure is the steady state, not JIT and cold caches.
   ctx.log('ingest: warm-up round…');
-  await runPool(300, concurrentStations, (i) => post(i, `${tag}2`));
+  await runPool(300, concurrentStations, (i, lane) => post(i, `${tag}2`, lane));
   ctx.log(`ingest: ${runsPerMeasurement} runs through the API, ${concurrentStations} concurrent…`);
   let start = performance.now();
-  await runPool(runsPerMeasurement, concurrentStations, (i) => post(i, `${tag}0`));
+  await runPool(runsPerMeasurement, concurrentStations, (i, lane) => post(i, `${tag}0`, lane));
   const apiRunsPerS = runsPerMeasurement / ((performance.now() - start) / 1000);
 
   ctx.log('ingest: the same rows through knex directly (raw ceiling)…');
@@ -61,11 +61,11 @@ export async function benchIngest(ctx: BenchContext, dataset: BenchDataset, tag:
   const serials = (await ctx.db('motors').where({ product_id: dataset.productId }).orderByRaw('RAND()').limit(500).select('serial')).map((m) => m.serial);
   const latencies: number[] = [];
   let ingesting = true;
-  const load = runPool(runsPerMeasurement, concurrentStations, (i) => post(i, `${tag}1`)).finally(() => { ingesting = false; });
+  stands = await connectStands(ctx.app.url, concurrentStations);
+  const load = runPool(runsPerMeasurement, concurrentStations, (i, lane) => post(i, `${tag}1`, lane)).finally(() => { ingesting = false; });
   for (let i = 0; ingesting || i < 200; i++) {
     const t0 = performance.now();
-    const response = await fetch(`${ctx.app.url}/api/v1/motors/${serials[i % serials.length]}`, { headers: { authorization: `Bearer ${readToken}` } });
-    await response.arrayBuffer();
+    const response = await httpRequest(`${ctx.app.url}/api/v1/motors/${serials[i % serials.length]}`, { token: readToken });
     if (response.status !== 200) throw new Error(`look-up answered ${response.status}`);
     latencies.push(performance.now() - t0);
     if (!ingesting && i >= 200) break;

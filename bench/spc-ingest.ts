@@ -6,6 +6,7 @@ import { freezeControlLimits } from '../server/services/spc/freeze-control-limit
 import { benchCharacteristicCode, benchProductCode, type BenchDataset } from './dataset.js';
 import { clientToken, type BenchContext } from './harness.js';
 import { round, runPool } from './stats.js';
+import { connectStands, httpRequest } from './http-client.js';
 
 const runsPerRound = 1000;
 const concurrentStations = 16;
@@ -58,18 +59,17 @@ export async function benchIngestWithRules(ctx: BenchContext, dataset: BenchData
   const next = valueSource(11);
   const base = Date.now() - 1_800_000;
   const round_ = async (prefix: string) => {
+    const stands = await connectStands(ctx.app.url, concurrentStations);
     const start = performance.now();
-    await runPool(runsPerRound, concurrentStations, async (i) => {
+    await runPool(runsPerRound, concurrentStations, async (i, lane) => {
       const startedAt = new Date(base + i);
       const document = {
         runId: randomUUID(), serial: `BX${prefix}-${String(i).padStart(5, '0')}`, product: benchProductCode, station: station.code, lot: lot.code,
         startedAt: startedAt.toISOString(), finishedAt: new Date(startedAt.getTime() + 1000).toISOString(), operatorBadge: 'B-0004', programVersion: 'bench-1',
         results: Array.from({ length: 40 }, (_, k) => ({ characteristic: benchCharacteristicCode(k), value: next(), unit: 'V' })),
       };
-      const response = await fetch(`${ctx.app.url}/api/v1/test-runs`, {
-        method: 'POST', headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' }, body: JSON.stringify(document),
-      });
-      if (response.status !== 201) throw new Error(`ingest answered ${response.status}: ${await response.text()}`);
+      const response = await httpRequest(`${ctx.app.url}/api/v1/test-runs`, { token, json: document, agent: stands[lane] });
+      if (response.status !== 201) throw new Error(`ingest answered ${response.status}: ${response.body}`);
     });
     return runsPerRound / ((performance.now() - start) / 1000);
   };

@@ -26,14 +26,14 @@ export function round(value: number, digits = 2): number {
   return Math.round(value * f) / f;
 }
 
-/** Runs `count` jobs with at most `concurrency` in flight. */
-export async function runPool(count: number, concurrency: number, job: (i: number) => Promise<void>): Promise<void> {
+/** Runs `count` jobs with at most `concurrency` in flight; each job is told its lane (0…concurrency−1). */
+export async function runPool(count: number, concurrency: number, job: (i: number, lane: number) => Promise<void>): Promise<void> {
   let next = 0;
-  await Promise.all(Array.from({ length: concurrency }, async () => {
+  await Promise.all(Array.from({ length: concurrency }, async (_, lane) => {
     for (;;) {
       const i = next++;
       if (i >= count) return;
-      await job(i);
+      await job(i, lane);
     }
   }));
 }
