@@ -10,9 +10,22 @@ import type { Knex } from 'knex';
 const activeHold = `(EXISTS (SELECT 1 FROM holds h WHERE h.motor_id = motors.id AND h.released_at IS NULL)
   OR EXISTS (SELECT 1 FROM holds h WHERE h.lot_id = motors.lot_id AND h.released_at IS NULL))`;
 
-/** The status expression for a motor whose latest run has just been given `verdict`. */
-export function statusAfterRun(db: Knex, verdict: 'pass' | 'fail'): Knex.Raw {
-  return db.raw(`CASE WHEN ${activeHold} THEN 'on hold' WHEN ? = 'pass' THEN 'passed' ELSE 'failed' END`, [verdict]);
+export type LatestRun = { motorId: number; runId: number; attempt: number; stationId: number; finishedAt: Date; verdict: 'pass' | 'fail' };
+
+/**
+ * Points each motor at the run just stored for it and sets its status from that run's verdict and
+ * the active holds: one statement for a whole ingest batch (the motors are already locked).
+ */
+export async function recordLatestRuns(trx: Knex.Transaction, runs: readonly LatestRun[]): Promise<void> {
+  if (runs.length === 0) return;
+  const latest = runs.map(() => 'SELECT ? AS id, ? AS attempts, ? AS run_id, ? AS station_id, ? AS finished_at, ? AS verdict').join(' UNION ALL ');
+  await trx.raw(
+    `UPDATE motors JOIN (${latest}) AS latest ON latest.id = motors.id
+     SET motors.attempts = latest.attempts, motors.latest_run_id = latest.run_id, motors.last_station_id = latest.station_id,
+         motors.last_tested_at = latest.finished_at,
+         motors.status = CASE WHEN ${activeHold} THEN 'on hold' WHEN latest.verdict = 'pass' THEN 'passed' ELSE 'failed' END`,
+    runs.flatMap((run) => [run.motorId, run.attempt, run.runId, run.stationId, run.finishedAt, run.verdict]),
+  );
 }
 
 export type MotorScope = { motorId: number } | { lotId: number };

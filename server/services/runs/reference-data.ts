@@ -24,12 +24,26 @@ export type LimitRow = { lsl: number | null; nominal: number | null; usl: number
 const products = new Map<string, { value: ProductRef; expiresAtMs: number }>();
 const lots = new Map<string, { value: LotRef; expiresAtMs: number }>();
 const limitsBySet = new Map<number, Map<number, LimitRow>>();
+/** Each product's approved revisions, newest first, as last read (see limits-in-force.ts). */
+const approvedRevisionsByProduct = new Map<number, ApprovedRevision[]>();
+
+/** An approved revision of a product: in force from effectiveFrom until a later approval. */
+export type ApprovedRevision = { id: number; revision: number; effectiveFrom: Date };
 
 export function forgetReferenceData(): void {
   forgetStations();
   products.clear();
   lots.clear();
   limitsBySet.clear();
+  approvedRevisionsByProduct.clear();
+}
+
+export function knownApprovedRevisions(productId: number): ApprovedRevision[] | undefined {
+  return approvedRevisionsByProduct.get(productId);
+}
+
+export function rememberApprovedRevisions(productId: number, newestFirst: ApprovedRevision[]): void {
+  approvedRevisionsByProduct.set(productId, newestFirst);
 }
 
 export async function loadProduct(db: Knex, code: string): Promise<ProductRef | null> {

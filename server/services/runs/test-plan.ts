@@ -27,7 +27,7 @@ export async function listProducts(db: Knex): Promise<ProductSummary[]> {
 export async function getTestPlan(db: Knex, productCode: string, at: Date): Promise<TestPlan> {
   const product = await loadProduct(db, productCode);
   if (!product) throw notFound(`No product ${productCode}.`);
-  const limitSet = await limitsInForce(db, { id: product.id }, at);
+  const limitSet = await limitsInForce(db, product.id, at, { fresh: true });
   const characteristics = [...product.characteristics.values()].sort((a, b) => a.sortOrder - b.sortOrder || a.id - b.id);
   return {
     product: { code: product.code, name: product.name, motorKind: product.motorKind, serialPattern: product.serialPatternText },

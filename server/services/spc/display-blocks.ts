@@ -7,22 +7,41 @@ export const blockOf = (runId: number) => Math.floor(runId / blockRunSpan);
 
 export type DisplayBlock = { blockNo: number; firstRunId: number; lastRunId: number; n: number; sum: number; min: number; max: number };
 
+export type DisplayPoint = { runId: number; characteristicId: number; value: number };
+
 /**
- * Adds one run's values to the display summary, inside the ingest transaction: a single
- * multi-row upsert whatever the number of characteristics. Rows go in characteristic order so
- * concurrent ingests that share a block lock its rows in the same order and queue, not deadlock.
+ * Adds freshly stored values to the display summary, inside the ingest transaction: one multi-row
+ * upsert per batch of runs, the values of each (characteristic, block) summed first. Rows go in
+ * (characteristic, block) order so concurrent ingests that share a block lock its rows in the same
+ * order and queue, not deadlock.
  */
-export async function recordDisplayBlocks(trx: Knex.Transaction, runId: number, measurements: ReadonlyArray<{ characteristicId: number; value: number }>): Promise<void> {
-  if (measurements.length === 0) return;
-  const block = blockOf(runId);
-  const sorted = [...measurements].sort((a, b) => a.characteristicId - b.characteristicId);
+export async function recordDisplayBlocks(trx: Knex.Transaction, points: readonly DisplayPoint[]): Promise<void> {
+  if (points.length === 0) return;
+  const blocks = new Map<string, { characteristicId: number; blockNo: number; first: number; last: number; n: number; sum: number; sumSq: number; min: number; max: number }>();
+  for (const { runId, characteristicId, value } of points) {
+    const blockNo = blockOf(runId);
+    const key = `${characteristicId}:${blockNo}`;
+    const block = blocks.get(key);
+    if (!block) {
+      blocks.set(key, { characteristicId, blockNo, first: runId, last: runId, n: 1, sum: value, sumSq: value * value, min: value, max: value });
+      continue;
+    }
+    block.first = Math.min(block.first, runId);
+    block.last = Math.max(block.last, runId);
+    block.n += 1;
+    block.sum += value;
+    block.sumSq += value * value;
+    block.min = Math.min(block.min, value);
+    block.max = Math.max(block.max, value);
+  }
+  const sorted = [...blocks.values()].sort((a, b) => a.characteristicId - b.characteristicId || a.blockNo - b.blockNo);
   await trx.raw(
     `INSERT INTO spc_display_blocks (characteristic_id, block_no, first_run_id, last_run_id, n, sum, sum_sq, min_value, max_value)
-     VALUES ${sorted.map(() => '(?,?,?,?,1,?,?,?,?)').join(',')}
+     VALUES ${sorted.map(() => '(?,?,?,?,?,?,?,?,?)').join(',')}
      ON DUPLICATE KEY UPDATE first_run_id = LEAST(first_run_id, VALUES(first_run_id)), last_run_id = GREATEST(last_run_id, VALUES(last_run_id)),
        n = n + VALUES(n), sum = sum + VALUES(sum), sum_sq = sum_sq + VALUES(sum_sq),
        min_value = LEAST(min_value, VALUES(min_value)), max_value = GREATEST(max_value, VALUES(max_value))`,
-    sorted.flatMap((m) => [m.characteristicId, block, runId, runId, m.value, m.value * m.value, m.value, m.value]),
+    sorted.flatMap((b) => [b.characteristicId, b.blockNo, b.first, b.last, b.n, b.sum, b.sumSq, b.min, b.max]),
   );
 }
 

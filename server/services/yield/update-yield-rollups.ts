@@ -9,40 +9,70 @@ export type StoredRunForYield = {
 };
 
 /**
- * Keeps the yield rollups current inside the ingest transaction (whose motor row lock orders
- * the runs of one motor): a motor's first run files it under its day, shift, station and lot with
- * its failing characteristics; a later run only moves the final verdict, because a motor counts
- * where and when it was first tested.
+ * Keeps the yield rollups current inside the ingest transaction (whose motor row locks order the
+ * runs of one motor): a motor's first run files it under its day, shift, station and lot with its
+ * failing characteristics; a later run only moves the final verdict, because a motor counts where
+ * and when it was first tested. A batch of first runs is written with one statement per table,
+ * the counters summed per group first and upserted in key order (so concurrent batches queue).
  */
-export async function updateYieldRollups(trx: Knex.Transaction, run: StoredRunForYield): Promise<void> {
-  const passed = run.verdict === 'pass';
-  if (run.attempt > 1) {
-    const motor = await trx('yield_motors').where({ motor_id: run.motorId })
-      .first('shift_day', 'shift_code', 'station_id', 'line', 'lot_id', 'product_id', 'final_pass');
-    if (!motor) return;
-    await trx('yield_motors').where({ motor_id: run.motorId }).update({ final_pass: passed, attempts: run.attempt });
-    if (Boolean(motor.final_pass) !== passed) {
-      const { final_pass: _previous, ...key } = motor;
-      await trx('yield_counts').where(key).increment('passed_final', passed ? 1 : -1);
-    }
-    return;
-  }
-  const slot = slotOf(await readShiftCalendar(trx), run.startedAt);
-  const group = { product_id: run.productId, lot_id: run.lotId, station_id: run.station.id, line: run.station.line, shift_day: slot.day };
-  await trx('yield_motors').insert({
-    ...group, motor_id: run.motorId, shift_code: slot.shift, first_run_id: run.runId, first_started_at: run.startedAt,
-    first_pass: passed, final_pass: passed, attempts: 1,
+export async function updateYieldRollups(trx: Knex.Transaction, runs: readonly StoredRunForYield[]): Promise<void> {
+  for (const retest of runs.filter((run) => run.attempt > 1)) await moveFinalVerdict(trx, retest);
+  const firsts = runs.filter((run) => run.attempt === 1);
+  if (firsts.length === 0) return;
+  const calendar = await readShiftCalendar(trx);
+  const filed = firsts.map((run) => {
+    const slot = slotOf(calendar, run.startedAt);
+    const group = { product_id: run.productId, lot_id: run.lotId, station_id: run.station.id, line: run.station.line, shift_day: slot.day };
+    return { run, group, shiftCode: slot.shift, passed: run.verdict === 'pass' };
   });
-  const one = passed ? 1 : 0;
+  await trx('yield_motors').insert(filed.map(({ run, group, shiftCode, passed }) => ({
+    ...group, motor_id: run.motorId, shift_code: shiftCode, first_run_id: run.runId, first_started_at: run.startedAt,
+    first_pass: passed, final_pass: passed, attempts: 1,
+  })));
+  await addToYieldCounts(trx, filed.map(({ group, shiftCode, passed }) => ({ ...group, shift_code: shiftCode, passed })));
+  const failures = filed.flatMap(({ run, group }) => [...new Set(run.failingCharacteristicIds)].map((characteristicId) => ({ ...group, motor_id: run.motorId, characteristic_id: characteristicId })));
+  if (failures.length > 0) await trx('yield_first_failures').insert(failures);
+}
+
+type CountedMotor = { shift_day: string; shift_code: string; station_id: number; line: string; lot_id: number; product_id: number; passed: boolean };
+
+/** One upsert of the per-group counters, summed per primary key and sent in key order. */
+async function addToYieldCounts(trx: Knex.Transaction, motors: readonly CountedMotor[]): Promise<void> {
+  const groups = new Map<string, { key: Omit<CountedMotor, 'passed'>; tested: number; passed: number }>();
+  for (const { passed, ...key } of motors) {
+    const id = JSON.stringify([key.shift_day, key.shift_code, key.station_id, key.line, key.lot_id, key.product_id]);
+    const group = groups.get(id) ?? { key, tested: 0, passed: 0 };
+    group.tested += 1;
+    group.passed += passed ? 1 : 0;
+    groups.set(id, group);
+  }
+  const sorted = [...groups.values()].sort((a, b) => compareKeys(a.key, b.key));
   await trx.raw(
     `INSERT INTO yield_counts (shift_day, shift_code, station_id, line, lot_id, product_id, tested, passed_first, passed_final)
-     VALUES (?, ?, ?, ?, ?, ?, 1, ?, ?)
-     ON DUPLICATE KEY UPDATE tested = tested + 1, passed_first = passed_first + VALUES(passed_first), passed_final = passed_final + VALUES(passed_final)`,
-    [slot.day, slot.shift, run.station.id, run.station.line, run.lotId, run.productId, one, one],
+     VALUES ${sorted.map(() => '(?, ?, ?, ?, ?, ?, ?, ?, ?)').join(', ')}
+     ON DUPLICATE KEY UPDATE tested = tested + VALUES(tested), passed_first = passed_first + VALUES(passed_first), passed_final = passed_final + VALUES(passed_final)`,
+    sorted.flatMap(({ key, tested, passed }) => [key.shift_day, key.shift_code, key.station_id, key.line, key.lot_id, key.product_id, tested, passed, passed]),
   );
-  const failing = [...new Set(run.failingCharacteristicIds)];
-  if (failing.length > 0) {
-    await trx('yield_first_failures').insert(failing.map((characteristicId) => ({ ...group, motor_id: run.motorId, characteristic_id: characteristicId })));
+}
+
+function compareKeys(a: Omit<CountedMotor, 'passed'>, b: Omit<CountedMotor, 'passed'>): number {
+  const pairs: Array<[string | number, string | number]> = [
+    [a.shift_day, b.shift_day], [a.shift_code, b.shift_code], [a.station_id, b.station_id], [a.line, b.line], [a.lot_id, b.lot_id], [a.product_id, b.product_id],
+  ];
+  for (const [x, y] of pairs) if (x !== y) return x < y ? -1 : 1;
+  return 0;
+}
+
+/** A retest: the motor stays filed where it was first tested; only its final verdict may move. */
+async function moveFinalVerdict(trx: Knex.Transaction, run: StoredRunForYield): Promise<void> {
+  const passed = run.verdict === 'pass';
+  const motor = await trx('yield_motors').where({ motor_id: run.motorId })
+    .first('shift_day', 'shift_code', 'station_id', 'line', 'lot_id', 'product_id', 'final_pass');
+  if (!motor) return;
+  await trx('yield_motors').where({ motor_id: run.motorId }).update({ final_pass: passed, attempts: run.attempt });
+  if (Boolean(motor.final_pass) !== passed) {
+    const { final_pass: _previous, ...key } = motor;
+    await trx('yield_counts').where(key).increment('passed_final', passed ? 1 : -1);
   }
 }
 

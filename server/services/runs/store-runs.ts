@@ -1,0 +1,125 @@
+import type { Knex } from 'knex';
+import { invalid } from '../../errors.js';
+import type { ResultInput, TestRunDocument, TestRunResponse } from '../../schemas/test-run.js';
+import { recordLatestRuns } from '../motors/refresh-motor-status.js';
+import { placeHold } from '../holds/place-hold.js';
+import { evaluateSpcAfterIngest } from '../spc/evaluate-after-ingest.js';
+import { updateYieldRollups } from '../yield/update-yield-rollups.js';
+import type { LimitSetInForce } from './limits-in-force.js';
+import type { judgeRun } from './judge-run.js';
+import type { ProductRef } from './reference-data.js';
+import type { StationRef } from './station-of-client.js';
+import { confirmLimitsInForce } from './confirm-limits.js';
+import { storeWaveformsAndReadings, type KeptRawData } from './store-waveforms-and-readings.js';
+
+/** A run that passed every check and has been judged: all that is left is to write it. */
+export type RunToStore = {
+  document: TestRunDocument; sha256: string; station: StationRef; product: ProductRef; lotId: number;
+  /** Posted and derived results, as judged (again, should the revision in force have changed). */
+  results: ResultInput[]; limitSet: LimitSetInForce; judged: ReturnType<typeof judgeRun>;
+  raw: KeptRawData; source: 'station' | 'upload'; receivedAt: Date;
+};
+
+type LockedMotor = { id: number; serial: string; product_id: number; lot_id: number; attempts: number };
+
+/**
+ * Writes a batch of checked runs of distinct serials in the caller's transaction and returns each
+ * run's answer, in the order given. Every table gets one statement for the whole batch, so hot
+ * rows (SPC state, display blocks, yield counters) are locked once per batch rather than once per
+ * run. Lock order, as in every ingest: motor rows (by serial) → runs and measurements → motor
+ * status → SPC state and display blocks → yield rollups → calibration holds and their audit.
+ * Throws when any run cannot be stored (a serial of another product or lot, a runId already
+ * taken): the caller rolls back and stores the runs one by one to give each its own answer.
+ */
+export async function storeRuns(trx: Knex.Transaction, runs: RunToStore[]): Promise<TestRunResponse[]> {
+  await confirmLimitsInForce(trx, runs);
+  const motors = await lockOrCreateMotors(trx, runs);
+  const stored = runs.map((run) => {
+    const motor = motors.get(run.document.serial) as LockedMotor;
+    const attempt = motor.attempts + 1;
+    // The calibration due date is a plant calendar date, so compare it with the stand's local date.
+    const calibrationOk = run.station.calibrationDue >= run.document.startedAt.slice(0, 10);
+    const response: TestRunResponse = {
+      runId: run.document.runId, serial: run.document.serial, attempt, verdict: run.judged.verdict, limitRevision: run.limitSet.revision,
+      results: run.judged.results.map(({ characteristicId: _id, ...result }) => result),
+    };
+    return { run, motorId: motor.id, attempt, calibrationOk, response, runId: 0 };
+  });
+
+  const inserted = await insertRuns(trx, stored);
+  for (const s of stored) s.runId = inserted.get(s.run.document.runId) as number;
+  await trx('measurements').insert(stored.flatMap(({ run, runId }) => run.judged.results.map((r) => ({
+    run_id: runId, characteristic_id: r.characteristicId, value: r.value, lsl: r.lsl, usl: r.usl, verdict: r.verdict,
+  }))));
+  for (const s of stored) await storeWaveformsAndReadings(trx, s.runId, s.run.raw);
+  await recordLatestRuns(trx, stored.map((s) => ({
+    motorId: s.motorId, runId: s.runId, attempt: s.attempt, stationId: s.run.station.id,
+    finishedAt: new Date(s.run.document.finishedAt), verdict: s.run.judged.verdict,
+  })));
+  await evaluateSpcAfterIngest(trx, stored.map((s) => ({
+    runId: s.runId, motorId: s.motorId, lotId: s.run.lotId, productId: s.run.product.id, startedAt: s.run.document.startedAt,
+    receivedAt: s.run.receivedAt, measurements: s.run.judged.results,
+  })));
+  await updateYieldRollups(trx, stored.map((s) => ({
+    motorId: s.motorId, runId: s.runId, attempt: s.attempt, startedAt: new Date(s.run.document.startedAt), verdict: s.run.judged.verdict,
+    productId: s.run.product.id, lotId: s.run.lotId, station: s.run.station,
+    failingCharacteristicIds: s.run.judged.results.filter((r) => r.verdict === 'fail').map((r) => r.characteristicId),
+  })));
+  for (const s of stored.filter((one) => !one.calibrationOk)) await holdForCalibration(trx, s.run);
+  return stored.map((s) => s.response);
+}
+
+/**
+ * The batch's motor rows, created where new and locked either way, so that concurrent runs of one
+ * serial count attempts one after the other. One statement: an insert that leaves existing rows
+ * as they are (but locks them) and returns every row, new or old.
+ */
+async function lockOrCreateMotors(trx: Knex.Transaction, runs: readonly RunToStore[]): Promise<Map<string, LockedMotor>> {
+  const bySerial = [...runs].sort((a, b) => (a.document.serial < b.document.serial ? -1 : a.document.serial > b.document.serial ? 1 : 0));
+  const [rows] = await trx.raw(
+    `INSERT INTO motors (serial, product_id, lot_id, status, attempts, created_at)
+     VALUES ${bySerial.map(() => "(?, ?, ?, 'not tested', 0, ?)").join(', ')}
+     ON DUPLICATE KEY UPDATE id = id
+     RETURNING id, serial, product_id, lot_id, attempts`,
+    bySerial.flatMap((run) => [run.document.serial, run.product.id, run.lotId, run.receivedAt]),
+  ) as [LockedMotor[]];
+  const motors = new Map(rows.map((row) => [row.serial, { ...row, id: Number(row.id) }]));
+  for (const run of runs) {
+    const motor = motors.get(run.document.serial);
+    if (!motor) throw new Error(`motor ${run.document.serial} was neither created nor found`);
+    if (motor.product_id !== run.product.id) throw invalid([{ field: 'serial', message: `serial ${run.document.serial} was built as another product` }]);
+    if (motor.lot_id !== run.lotId) throw invalid([{ field: 'lot', message: `serial ${run.document.serial} belongs to another lot` }]);
+  }
+  return motors;
+}
+
+type StoredRun = { run: RunToStore; motorId: number; attempt: number; calibrationOk: boolean; response: TestRunResponse };
+
+/** The batch's test_runs rows; returns the id given to each runId. */
+async function insertRuns(trx: Knex.Transaction, stored: readonly StoredRun[]): Promise<Map<string, number>> {
+  const columns = [
+    'run_uuid', 'motor_id', 'station_id', 'lot_id', 'attempt', 'started_at', 'finished_at', 'operator_badge', 'program_version',
+    'limit_set_id', 'verdict', 'calibration_ok', 'calibration_due', 'body_sha256', 'response_json', 'source', 'received_at',
+  ];
+  const [rows] = await trx.raw(
+    `INSERT INTO test_runs (${columns.join(', ')})
+     VALUES ${stored.map(() => `(${columns.map(() => '?').join(', ')})`).join(', ')}
+     RETURNING id, run_uuid`,
+    stored.flatMap(({ run, motorId, attempt, calibrationOk, response }) => [
+      run.document.runId, motorId, run.station.id, run.lotId, attempt, new Date(run.document.startedAt), new Date(run.document.finishedAt),
+      run.document.operatorBadge, run.document.programVersion, run.limitSet.id, run.judged.verdict, calibrationOk, run.station.calibrationDue,
+      run.sha256, JSON.stringify(response), run.source, run.receivedAt,
+    ]),
+  ) as [Array<{ id: number | string; run_uuid: string }>];
+  return new Map(rows.map((row) => [row.run_uuid, Number(row.id)]));
+}
+
+/** A run from a station whose calibration had expired is kept, flagged, and holds its motor. */
+async function holdForCalibration(trx: Knex.Transaction, run: RunToStore): Promise<void> {
+  const { document, station } = run;
+  await placeHold(trx, {
+    target: { type: 'motor', serial: document.serial }, kind: 'calibration', at: run.receivedAt,
+    actor: { name: `station ${station.code}`, role: null },
+    reason: `Tested on station ${station.code} on ${document.startedAt.slice(0, 10)}, after its calibration fell due on ${station.calibrationDue}; retest on a calibrated station or disposition the run.`,
+  });
+}

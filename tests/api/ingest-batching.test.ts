@@ -1,0 +1,160 @@
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import type { Knex } from 'knex';
+import { startApiServer } from '../support/api-server.js';
+import { truncateAll } from '../support/migrate.js';
+import { signIn } from '../support/sign-in.js';
+import type { RunningServer } from '../../server/index.js';
+import { ingestTestRun } from '../../server/services/runs/ingest-test-run.js';
+import { jsonColumn } from '../../server/db/json-column.js';
+import { freshState, phaseTwoStep, type SpcStateData } from '../../server/services/spc/phase-two-step.js';
+import { AppError } from '../../server/errors.js';
+import { createPlant, createProduct, nextSerial, runDocument, type PlantFixture } from '../factories.js';
+
+// Stands post concurrently; the writer stores the runs that arrive together in one transaction.
+// These tests post many runs at once and check that every run's record, and every summary kept
+// on ingest (motor status, yield counters, SPC state, chart blocks), is exactly what storing the
+// runs one by one would have left.
+
+async function commits(db: Knex): Promise<number> {
+  const [rows] = await db.raw("SHOW GLOBAL STATUS LIKE 'Com_commit'");
+  return Number((rows as Array<{ Value: string }>)[0].Value);
+}
+
+function withValue(plant: PlantFixture, code: string, value: number, overrides: Parameters<typeof runDocument>[1] = {}) {
+  const document = runDocument(plant, overrides);
+  document.results = document.results.map((r) => (r.characteristic === code ? { ...r, value } : r));
+  return document;
+}
+
+describe('ingest of runs posted at the same time', () => {
+  let server: RunningServer;
+  let plant: PlantFixture;
+
+  beforeAll(async () => { server = await startApiServer(); });
+  afterAll(async () => { await server.stop(); });
+  beforeEach(async () => {
+    await truncateAll(server.db);
+    plant = await createPlant(server.db);
+  });
+
+  it('when 24 stands post at once, then every run is stored once, in a few shared transactions, and the rollups add up', async () => {
+    // Every third run fails bemf.ke (USL 52).
+    const documents = Array.from({ length: 24 }, (_, i) => withValue(plant, 'bemf.ke', i % 3 === 0 ? 53 : 50.3));
+    const before = await commits(server.db);
+    const outcomes = await Promise.all(documents.map((d) => ingestTestRun(server.db, d)));
+    const used = (await commits(server.db)) - before;
+
+    expect(outcomes.map((o) => o.status)).toEqual(documents.map(() => 201));
+    expect(outcomes.map((o) => o.body.verdict)).toEqual(documents.map((_, i) => (i % 3 === 0 ? 'fail' : 'pass')));
+    // One transaction per run would be 24 commits; the first run goes alone, the rest together.
+    expect(used).toBeLessThanOrEqual(6);
+
+    const runs = await server.db('test_runs').orderBy('id').select('id', 'run_uuid', 'motor_id', 'attempt', 'verdict');
+    expect(runs.map((r) => r.run_uuid).sort()).toEqual(documents.map((d) => d.runId).sort());
+    expect(runs.every((r) => r.attempt === 1)).toBe(true);
+    expect(await server.db('measurements').count({ n: '*' })).toEqual([{ n: 24 * documents[0].results.length }]);
+
+    const motors = await server.db('motors').select('id', 'serial', 'status', 'attempts', 'latest_run_id');
+    for (const document of documents) {
+      const motor = motors.find((m) => m.serial === document.serial);
+      const run = runs.find((r) => r.run_uuid === document.runId);
+      expect(motor).toMatchObject({ attempts: 1, latest_run_id: run.id, status: run.verdict === 'pass' ? 'passed' : 'failed' });
+    }
+
+    const counts = (await server.db('yield_counts').sum({ tested: 'tested', first: 'passed_first', final: 'passed_final' }).first())!;
+    expect([counts.tested, counts.first, counts.final].map(Number)).toEqual([24, 16, 16]);
+    const failures = await server.db('yield_first_failures').count({ n: '*' }).first();
+    expect(Number(failures?.n)).toBe(8);
+
+    const ke = plant.product.characteristics.find((c) => c.code === 'bemf.ke')!.id;
+    const blocks = (await server.db('spc_display_blocks').where({ characteristic_id: ke }).sum({ n: 'n', sum: 'sum' }).min({ low: 'min_value' }).max({ high: 'max_value' }).first())!;
+    expect(Number(blocks.n)).toBe(24);
+    expect(Number(blocks.sum)).toBeCloseTo(8 * 53 + 16 * 50.3, 9);
+    expect([blocks.low, blocks.high]).toEqual([50.3, 53]);
+  });
+
+  it('when one run of a batch names a serial built as another product, then only that run is refused and the others are stored', async () => {
+    const other = await createProduct(server.db, { serialPrefix: plant.product.serialPrefix });
+    const taken = nextSerial(plant.product);
+    await server.db('motors').insert({ serial: taken, product_id: other.id, lot_id: plant.lot.id, status: 'not tested', attempts: 0, created_at: new Date() });
+    const documents = Array.from({ length: 10 }, (_, i) => runDocument(plant, i === 4 ? { serial: taken } : {}));
+
+    const settled = await Promise.allSettled(documents.map((d) => ingestTestRun(server.db, d)));
+
+    const refused = settled[4];
+    expect(refused.status).toBe('rejected');
+    const error = (refused as PromiseRejectedResult).reason as AppError;
+    expect(error.status).toBe(422);
+    expect(error.fields).toEqual([{ field: 'serial', message: `serial ${taken} was built as another product` }]);
+    expect(settled.filter((s) => s.status === 'fulfilled')).toHaveLength(9);
+    const stored = await server.db('test_runs').pluck('run_uuid');
+    expect(stored.sort()).toEqual(documents.filter((_, i) => i !== 4).map((d) => d.runId).sort());
+    expect(await server.db('motors').where({ serial: taken }).first('attempts', 'latest_run_id')).toEqual({ attempts: 0, latest_run_id: null });
+  });
+
+  it('when several runs of one serial arrive together with others, then its attempts count 1, 2, 3 and the motor points at the last', async () => {
+    const serial = nextSerial(plant.product);
+    const retests = [53, 53, 50.3].map((value) => withValue(plant, 'bemf.ke', value, { serial }));
+    const others = Array.from({ length: 6 }, () => runDocument(plant));
+
+    const outcomes = await Promise.all([...retests, ...others].map((d) => ingestTestRun(server.db, d)));
+
+    expect(outcomes.slice(0, 3).map((o) => o.body.attempt).sort()).toEqual([1, 2, 3]);
+    const runs = await server.db('test_runs').join('motors', 'motors.id', 'test_runs.motor_id').where('motors.serial', serial)
+      .orderBy('attempt').select('test_runs.id', 'attempt', 'run_uuid');
+    expect(runs.map((r) => r.attempt)).toEqual([1, 2, 3]);
+    const motor = await server.db('motors').where({ serial }).first('attempts', 'latest_run_id', 'status');
+    expect(motor).toEqual({ attempts: 3, latest_run_id: runs[2].id, status: outcomes.find((o) => o.body.attempt === 3)!.body.verdict === 'pass' ? 'passed' : 'failed' });
+    const filed = await server.db('yield_motors').join('motors', 'motors.id', 'yield_motors.motor_id').where('motors.serial', serial).first('yield_motors.attempts', 'first_run_id');
+    expect(filed).toEqual({ attempts: 3, first_run_id: runs[0].id });
+  });
+
+  it('when a revision was approved after this process last read the revisions, then the run is judged by it', async () => {
+    const first = await ingestTestRun(server.db, runDocument(plant));
+    expect(first.body.limitRevision).toBe(1);
+    // Another app process approves revision 2 (bemf.ke USL 50.2, in force since an hour ago):
+    // this process's list of revisions is not told.
+    const [revision2] = await server.db('limit_sets').insert({
+      product_id: plant.product.id, revision: 2, status: 'approved', effective_from: new Date(Date.now() - 3_600_000),
+      authored_by: 'test-quality', authored_by_name: 'Test Quality', authored_at: new Date(),
+      approved_by: 'test-quality2', approved_by_name: 'Test Quality Two', approved_at: new Date(),
+    });
+    await server.db('limits').insert(plant.product.characteristics.map((c) => ({
+      limit_set_id: revision2, characteristic_id: c.id, lsl: c.lsl, nominal: c.nominal ?? null, usl: c.code === 'bemf.ke' ? 50.2 : c.usl,
+    })));
+
+    const second = await ingestTestRun(server.db, runDocument(plant));
+
+    expect(second.body).toMatchObject({ limitRevision: 2, verdict: 'fail' });
+    expect(second.body.results.find((r) => r.characteristic === 'bemf.ke')).toMatchObject({ usl: 50.2, verdict: 'fail' });
+    const stored = await server.db('test_runs').where({ run_uuid: second.body.runId }).first('limit_set_id', 'verdict');
+    expect(stored).toEqual({ limit_set_id: Number(revision2), verdict: 'fail' });
+  });
+
+  it('when runs judged against frozen limits arrive together, then the SPC state equals one built run by run in run order', async () => {
+    const quality = (await signIn(server.url, 'quality')).cookie;
+    const ke = plant.product.characteristics.find((c) => c.code === 'bemf.ke')!.id;
+    for (let i = 0; i < 100; i++) await ingestTestRun(server.db, withValue(plant, 'bemf.ke', i % 2 === 0 ? 49.9 : 50.1));
+    const post = (path: string) => request(server.url).post(path).set('cookie', quality).set('x-fluxtrail-csrf', '1');
+    const trial = await post(`/api/v1/spc/characteristics/${ke}/trial-limits`).send({ chartKind: 'ewma' }).expect(201);
+    await post(`/api/v1/spc/control-limits/${trial.body.id}/freeze`).send({}).expect(200);
+    const frozen = jsonColumn<SpcStateData>((await server.db('spc_state').where({ characteristic_id: ke }).first('state_json')).state_json);
+    const lastBaselineRun = Number((await server.db('test_runs').max({ id: 'id' }).first())?.id);
+
+    // A drift upwards, posted 30 at a time.
+    const values = Array.from({ length: 30 }, (_, i) => 50 + i * 0.01);
+    await Promise.all(values.map((value) => ingestTestRun(server.db, withValue(plant, 'bemf.ke', value))));
+
+    const series = await server.db('measurements').join('test_runs', 'test_runs.id', 'measurements.run_id')
+      .where('measurements.characteristic_id', ke).andWhere('test_runs.id', '>', lastBaselineRun)
+      .orderBy('test_runs.id').select('test_runs.id as runId', 'test_runs.lot_id as lotId', 'measurements.value');
+    let replayed = freshState(frozen.limits);
+    for (const point of series) replayed = phaseTwoStep(replayed, { runId: point.runId, lotId: point.lotId, value: point.value }).state;
+    const stored = jsonColumn<SpcStateData>((await server.db('spc_state').where({ characteristic_id: ke }).first('state_json')).state_json);
+    const { episodes: _stored, ...storedState } = stored;
+    const { episodes: _replayed, ...replayedState } = replayed;
+    expect(storedState).toEqual(replayedState);
+    expect(stored.ewma?.t).toBe(30);
+  });
+});
