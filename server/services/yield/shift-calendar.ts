@@ -15,16 +15,23 @@ export const defaultShiftCalendar: ShiftCalendar = {
   ],
 };
 
+type CalendarRow = { time_zone: string | null; first_pass_target: number | null; code: string | null; name: string | null; starts_minute: number | null };
+
+/** The calendar in force, in one query (ingest reads it in every batch): settings beside each shift. */
 export async function readShiftCalendar(db: Knex): Promise<ShiftCalendar> {
-  const [settings, shifts] = await Promise.all([
-    db('yield_settings').where({ id: 1 }).first('time_zone', 'first_pass_target'),
-    db('plant_shifts').orderBy('starts_minute').select('code', 'name', 'starts_minute'),
-  ]);
+  const [rows] = await db.raw(
+    `SELECT settings.time_zone, settings.first_pass_target, shifts.code, shifts.name, shifts.starts_minute
+       FROM (SELECT 1 AS one) AS base
+       LEFT JOIN yield_settings AS settings ON settings.id = 1
+       LEFT JOIN plant_shifts AS shifts ON TRUE
+      ORDER BY shifts.starts_minute`,
+  ) as [CalendarRow[]];
+  const shifts = rows.filter((row) => row.code !== null);
   return {
-    timeZone: settings?.time_zone ?? defaultShiftCalendar.timeZone,
-    firstPassTarget: settings?.first_pass_target ?? defaultShiftCalendar.firstPassTarget,
+    timeZone: rows[0]?.time_zone ?? defaultShiftCalendar.timeZone,
+    firstPassTarget: rows[0]?.first_pass_target ?? defaultShiftCalendar.firstPassTarget,
     shifts: shifts.length > 0
-      ? shifts.map((s: { code: string; name: string; starts_minute: number }) => ({ code: s.code, name: s.name, startsMinute: s.starts_minute }))
+      ? shifts.map((s) => ({ code: s.code as string, name: s.name as string, startsMinute: s.starts_minute as number }))
       : defaultShiftCalendar.shifts,
   };
 }
