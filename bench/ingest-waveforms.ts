@@ -24,7 +24,7 @@ export async function benchIngestWithWaveforms(ctx: BenchContext, dataset: Bench
   const stands = await connectStands(ctx.app.url, concurrentStations);
   const post = async (i: number, lane: number) => {
     const document = { ...runDocument(`BX${tag}3-${String(i).padStart(5, '0')}`, station.code, lot.code, new Date(base + i)), waveforms: [spin] };
-    const response = await httpRequest(`${ctx.app.url}/api/v1/test-runs`, { token, json: document, agent: stands[lane] });
+    const response = await httpRequest(`${ctx.app.url}/api/v1/test-runs`, { token, json: document, stand: stands[lane] });
     if (response.status !== 201) throw new Error(`ingest with a waveform answered ${response.status}: ${response.body}`);
   };
   ctx.log(`ingest with waveforms: ${runs} runs, ${concurrentStations} concurrent…`);

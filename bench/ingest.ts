@@ -27,7 +27,7 @@ export async function benchIngest(ctx: BenchContext, dataset: BenchDataset, tag:
   let stands = await connectStands(ctx.app.url, concurrentStations);
   const post = async (i: number, prefix: string, lane: number) => {
     const document = runDocument(`BX${prefix}-${String(i).padStart(5, '0')}`, station.code, lot.code, new Date(base + i));
-    const response = await httpRequest(`${ctx.app.url}/api/v1/test-runs`, { token, json: document, agent: stands[lane] });
+    const response = await httpRequest(`${ctx.app.url}/api/v1/test-runs`, { token, json: document, stand: stands[lane] });
     if (response.status !== 201) throw new Error(`ingest answered ${response.status}: ${response.body}`);
   };
 

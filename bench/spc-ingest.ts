@@ -68,7 +68,7 @@ export async function benchIngestWithRules(ctx: BenchContext, dataset: BenchData
         startedAt: startedAt.toISOString(), finishedAt: new Date(startedAt.getTime() + 1000).toISOString(), operatorBadge: 'B-0004', programVersion: 'bench-1',
         results: Array.from({ length: 40 }, (_, k) => ({ characteristic: benchCharacteristicCode(k), value: next(), unit: 'V' })),
       };
-      const response = await httpRequest(`${ctx.app.url}/api/v1/test-runs`, { token, json: document, agent: stands[lane] });
+      const response = await httpRequest(`${ctx.app.url}/api/v1/test-runs`, { token, json: document, stand: stands[lane] });
       if (response.status !== 201) throw new Error(`ingest answered ${response.status}: ${response.body}`);
     });
     return runsPerRound / ((performance.now() - start) / 1000);
