@@ -45,7 +45,7 @@ const operations: Record<string, Record<string, Operation>> = {
   } },
   '/api/v1/motors/{serial}/holds': { post: {
     summary: 'Hold a motor (audited)', security: 'holds:place', params: ['serial'], body: 'ReasonBody',
-    responses: { 201: { description: 'placed', schema: 'Hold' }, 404: problem('unknown serial') },
+    responses: { 201: { description: 'placed', schema: 'Hold' }, 404: problem('unknown serial'), 409: problem('the motor already has an active manual hold (field serial)') },
   } },
   '/api/v1/lots': { get: { summary: 'Lots with counts by status', security: 'lots:read or records:read', query: 'LotListQuery', responses: { 200: { description: 'one page', schema: 'LotList' } } } },
   '/api/v1/lots/{code}': { get: {
@@ -54,7 +54,7 @@ const operations: Record<string, Record<string, Operation>> = {
   } },
   '/api/v1/lots/{code}/holds': { post: {
     summary: 'Hold a lot (audited)', security: 'holds:place', params: ['code'], body: 'ReasonBody',
-    responses: { 201: { description: 'placed', schema: 'Hold' }, 404: problem('unknown lot') },
+    responses: { 201: { description: 'placed', schema: 'Hold' }, 404: problem('unknown lot'), 409: problem('the lot already has an active manual hold (field code)') },
   } },
   '/api/v1/holds/{id}/release': { post: {
     summary: 'Release a hold (audited)', security: 'holds:release', params: ['id'], body: 'ReasonBody',

@@ -116,7 +116,8 @@ async function storeRun(trx: Knex.Transaction, run: RunToStore, now: Date): Prom
   });
   if (!calibrationOk) {
     await placeHold(trx, {
-      target: { type: 'motor', serial: document.serial }, kind: 'calibration', at: now,
+      // A retest on an overdue stand keeps the hold already placed; the run itself records its calibration state.
+      target: { type: 'motor', serial: document.serial }, kind: 'calibration', at: now, ifAlreadyHeld: 'keep',
       actor: { name: `station ${station.code}`, role: null },
       reason: `Tested on station ${station.code} on ${document.startedAt.slice(0, 10)}, after its calibration fell due on ${station.calibrationDue}; retest on a calibrated station or disposition the run.`,
     });
