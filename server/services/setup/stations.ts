@@ -4,6 +4,7 @@ import { conflict, notFound } from '../../errors.js';
 import type { StationCreateInput, StationUpdateInput } from '../../schemas/setup.js';
 import { recordAudit } from '../audit/record-audit.js';
 import { actorOf, isoDay, reasonOf } from './actor.js';
+import { changeReferenceData } from './change-reference-data.js';
 
 export type StationRow = { id: number; code: string; line: string; kind: string; name: string; calibration_due: Date; active: number | boolean };
 export type CalibrationState = 'valid' | 'due-soon' | 'expired';
@@ -40,7 +41,7 @@ export async function listStations(db: Knex, now = new Date()) {
 }
 
 export async function createStation(db: Knex, user: SessionUser, input: StationCreateInput, now = new Date()) {
-  return db.transaction(async (trx) => {
+  return changeReferenceData(db, async (trx) => {
     if (await trx('stations').where({ code: input.code }).first()) {
       throw conflict(`A station with the code ${input.code} exists already.`, [{ field: 'code', message: 'Already in use' }]);
     }
@@ -57,7 +58,7 @@ export async function createStation(db: Knex, user: SessionUser, input: StationC
 }
 
 export async function updateStation(db: Knex, user: SessionUser, code: string, input: StationUpdateInput, now = new Date()) {
-  return db.transaction(async (trx) => {
+  return changeReferenceData(db, async (trx) => {
     const before = toStation(await findStationRow(trx, code, { lock: true }), now);
     await trx('stations').where({ code }).update({ line: input.line, kind: input.kind, name: input.name, active: input.active });
     const after = toStation(await findStationRow(trx, code), now);
