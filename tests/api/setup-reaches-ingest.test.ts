@@ -54,6 +54,17 @@ describe('Setup changes reach the next ingest in the same process', () => {
     expect(refused.body.error.fields).toEqual([{ field: 'station', message: `must be ${other.code}, the station bound to this client` }]);
   });
 
+  it('when admin moves a station\'s calibration due date into the past, then the next run on it holds its motor', async () => {
+    await admin.put(`${setupApi}/stations/${plant.station.code}`, {
+      name: 'End-of-line stand', line: plant.station.line, kind: 'eol-pmsm', active: true, calibrationDue: '2021-03-31',
+      reason: 'Load cell drift found; stand out of calibration',
+    }).expect(200);
+    const document = runDocument(plant);
+    await post(document).expect(201);
+    expect(await server.db('test_runs').where({ run_uuid: document.runId }).first()).toMatchObject({ calibration_ok: 0, calibration_due: new Date('2021-03-31T00:00:00Z') });
+    expect(await server.db('motors').where({ serial: document.serial }).first()).toMatchObject({ status: 'on hold' });
+  });
+
   it('when admin records a calibration that has already run out, then the next run on that station holds its motor', async () => {
     await admin.post(`${setupApi}/stations/${plant.station.code}/calibrations`, {
       calibratedOn: '2020-01-10', due: '2020-07-10', certificate: 'CAL-2020-0031', reason: 'Certificate found in the archive',
