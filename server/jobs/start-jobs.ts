@@ -19,8 +19,8 @@ export type RunningJobs = { worker: string; stop(): Promise<void> };
 
 /**
  * The background job loop of one app process: on start and every so often it fails packs whose
- * process died and takes up upload passes whose process died, then builds queued packs one at a time. Stopping puts a job in progress back in
- * the queue so the next process to start picks it up again.
+ * process died and takes up upload passes whose process died, then builds queued packs one at a
+ * time. Stopping puts a job in progress back in the queue so the next process picks it up again.
  */
 export function startJobs({ db, config, pollMs = 1000, staleSeconds = 60, heartbeatMs = 5000, sheetRowCap }: JobsOptions): RunningJobs {
   const worker = `${hostname()}:${process.pid}:${randomBytes(4).toString('hex')}`;

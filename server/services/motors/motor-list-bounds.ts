@@ -18,8 +18,9 @@ const boundedMatches = 20_000;
  * The matches' span in the sort's column is implied by the filters, so it is found first, through
  * the other sort's index (read index-only, at most boundedMatches entries), and given to the page
  * query as a range: the ordered read then starts and ends among the matches. Null when no motor
- * matches; no bounds when the filters leave more than boundedMatches motors, common enough that
- * the ordered read meets them soon, or where no filter is on the other column.
+ * matches; no bounds where no filter is on the other column, or when more than boundedMatches
+ * motors match: finding their span would then cost about what the ordered read does, and that
+ * read stays within one pass over its index (the list's worst case, measured by the benchmark).
  */
 export async function impliedSortBounds(db: Knex, filter: MotorListFilter, ids: FilterIds): Promise<SortBounds | null> {
   const other = filter.sort === 'serial' ? 'lastTestedAt' : 'serial';
