@@ -10,7 +10,7 @@ describe('holding a lot from its page', () => {
   it('when quality holds a lot, then the hold button gives way to the hold in force, and a second hold is refused with 409', async () => {
     const { page } = browser;
     await signInAs(page, appUrl, 'quality');
-    await expect.poll(() => page.getByRole('navigation', { name: 'Screens' }).getByRole('link', { name: 'Lots' }).count(), { timeout: 15_000 }).toBe(1);
+    await expect.poll(() => page.getByRole('navigation', { name: 'Screens' }).getByRole('link', { name: 'Lots' }).count()).toBe(1);
     await page.goto(`${appUrl}/lots/L2631-02`);
     await page.getByRole('button', { name: 'Hold this lot' }).click();
     const dialog = page.getByRole('dialog', { name: 'Hold lot L2631-02' });

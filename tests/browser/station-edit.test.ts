@@ -12,7 +12,7 @@ describe('editing a station in Setup', () => {
   it('when admin edits a calibrated station and moves its due date into the past, then it shows as expired, the history stays and the change is audited', async () => {
     const { page } = browser;
     await signInAs(page, appUrl, 'admin');
-    await expect.poll(() => page.getByRole('navigation', { name: 'Screens' }).getByRole('link', { name: 'Setup' }).count(), { timeout: 15_000 }).toBe(1);
+    await expect.poll(() => page.getByRole('navigation', { name: 'Screens' }).getByRole('link', { name: 'Setup' }).count()).toBe(1);
     await page.goto(`${appUrl}/setup?section=stations`);
 
     await page.getByRole('button', { name: 'New station' }).click();
