@@ -13,6 +13,7 @@ import { benchYield } from './yield.js';
 import { benchSpcChart } from './spc-chart.js';
 import { benchIngestWithRules } from './spc-ingest.js';
 import { benchIngestWithWaveforms } from './ingest-waveforms.js';
+import { benchMotorsList } from './motors-list.js';
 
 const log = (line: string) => console.log(`[bench] ${line}`);
 const wanted = process.argv.slice(2);
@@ -29,6 +30,7 @@ const sections: Section[] = [
   { name: 'spc-chart', key: 'spcChart', run: benchSpcChart },
   { name: 'spc-ingest', key: 'spcIngest', run: benchIngestWithRules },
   { name: 'yield', key: 'yield', run: benchYield },
+  { name: 'motors-list', key: 'motorsList', run: benchMotorsList },
   { name: 'evidence', key: 'evidencePack', run: (ctx) => benchEvidencePack(ctx) },
   { name: 'audit', key: 'auditChain', run: (ctx) => benchAuditChain(ctx) },
 ];

@@ -5,6 +5,7 @@ import { createDb } from './db/knex.js';
 import { buildApp } from './app.js';
 import { startJobs } from './jobs/start-jobs.js';
 import { startMailOutbox } from './jobs/mail-outbox.js';
+import { stopUploadPasses } from './services/uploads/finish-upload-pass.js';
 import type { Knex } from 'knex';
 import cluster from 'node:cluster';
 import { runWorkers } from './workers.js';
@@ -24,6 +25,7 @@ export async function startServer(config: Config = loadConfig()): Promise<Runnin
   return {
     server, db, config, url: `http://${config.host}:${port}`,
     async stop() {
+      await stopUploadPasses();
       await jobs?.stop();
       await mailOutbox?.stop();
       await new Promise<void>((resolve) => server.close(() => resolve()));

@@ -3,6 +3,7 @@ import { hostname } from 'node:os';
 import { randomBytes } from 'node:crypto';
 import type { Config } from '../config.js';
 import { claimNextExportJob, failInterruptedExportJobs, runExportJob } from './export-jobs.js';
+import { resumeInterruptedUploads } from './upload-passes.js';
 
 export type JobsOptions = {
   db: Knex;
@@ -17,9 +18,9 @@ export type JobsOptions = {
 export type RunningJobs = { worker: string; stop(): Promise<void> };
 
 /**
- * The background job loop of one app process: on start and every so often it fails jobs whose
- * process died, then builds queued packs one at a time. Stopping puts a job in progress back in
- * the queue so the next process to start picks it up again.
+ * The background job loop of one app process: on start and every so often it fails packs whose
+ * process died and takes up upload passes whose process died, then builds queued packs one at a
+ * time. Stopping puts a job in progress back in the queue so the next process picks it up again.
  */
 export function startJobs({ db, config, pollMs = 1000, staleSeconds = 60, heartbeatMs = 5000, sheetRowCap }: JobsOptions): RunningJobs {
   const worker = `${hostname()}:${process.pid}:${randomBytes(4).toString('hex')}`;
@@ -32,6 +33,7 @@ export function startJobs({ db, config, pollMs = 1000, staleSeconds = 60, heartb
     if (Date.now() - lastSweep >= staleSeconds * 1000) {
       lastSweep = Date.now();
       await failInterruptedExportJobs(db, config.dataDir, staleSeconds);
+      await resumeInterruptedUploads(db, config.dataDir);
     }
     while (!shutdown.signal.aborted) {
       const job = await claimNextExportJob(db, worker);

@@ -36,7 +36,7 @@ export const docsPageScript = `(async () => {
       const h = el('h2'); const m = el('span', method.toUpperCase()); m.className = 'method'; h.append(m, path);
       main.append(h, el('p', op.summary + '. ' + op.description));
       if (op.parameters.length) main.append(block('Parameters', op.parameters));
-      if (op.requestBody) main.append(block('Request body', resolve(op.requestBody.content['application/json'].schema)));
+      for (const [type, media] of Object.entries(op.requestBody ? op.requestBody.content : {})) main.append(block('Request body, ' + type, resolve(media.schema)));
       for (const [status, response] of Object.entries(op.responses)) {
         const schema = response.content ? resolve(response.content['application/json'].schema) : undefined;
         main.append(schema ? block(status + ' ' + response.description, schema) : el('p', status + ' ' + response.description));

@@ -2,6 +2,8 @@ import { z } from 'zod';
 import '../schemas/test-run.js';
 import '../routes/v1/request-schemas.js';
 import './response-schemas.js';
+import '../routes/v1/upload-request-schemas.js';
+import './upload-response-schemas.js';
 
 /**
  * The OpenAPI 3.1 description of the station and record API, generated from the same zod schemas
@@ -9,6 +11,8 @@ import './response-schemas.js';
  */
 type Operation = {
   summary: string; security: string; query?: string; body?: string;
+  /** A multipart/form-data body (a file upload) instead of JSON. */
+  form?: string;
   responses: Record<string, { description: string; schema?: string }>;
   params?: string[];
 };
@@ -16,6 +20,7 @@ type Operation = {
 const ref = (id: string) => ({ $ref: `#/components/schemas/${id}` });
 const problem = (description: string) => ({ description, schema: 'Error' });
 const readers = 'signed-in people with motors:read, or a client with scope records:read';
+const uploaders = 'signed-in people with uploads:commit (quality, admin)';
 
 const operations: Record<string, Record<string, Operation>> = {
   '/api/v1/products': { get: { summary: 'Products a stand can test', security: `${readers} or test-runs:write`, responses: { 200: { description: 'products', schema: 'ProductList' } } } },
@@ -45,7 +50,7 @@ const operations: Record<string, Record<string, Operation>> = {
   } },
   '/api/v1/motors/{serial}/holds': { post: {
     summary: 'Hold a motor (audited)', security: 'holds:place', params: ['serial'], body: 'ReasonBody',
-    responses: { 201: { description: 'placed', schema: 'Hold' }, 404: problem('unknown serial') },
+    responses: { 201: { description: 'placed', schema: 'Hold' }, 404: problem('unknown serial'), 409: problem('the motor already has an active manual hold (field serial)') },
   } },
   '/api/v1/lots': { get: { summary: 'Lots with counts by status', security: 'lots:read or records:read', query: 'LotListQuery', responses: { 200: { description: 'one page', schema: 'LotList' } } } },
   '/api/v1/lots/{code}': { get: {
@@ -54,11 +59,36 @@ const operations: Record<string, Record<string, Operation>> = {
   } },
   '/api/v1/lots/{code}/holds': { post: {
     summary: 'Hold a lot (audited)', security: 'holds:place', params: ['code'], body: 'ReasonBody',
-    responses: { 201: { description: 'placed', schema: 'Hold' }, 404: problem('unknown lot') },
+    responses: { 201: { description: 'placed', schema: 'Hold' }, 404: problem('unknown lot'), 409: problem('the lot already has an active manual hold (field code)') },
   } },
   '/api/v1/holds/{id}/release': { post: {
     summary: 'Release a hold (audited)', security: 'holds:release', params: ['id'], body: 'ReasonBody',
     responses: { 200: { description: 'released', schema: 'Hold' }, 404: problem('unknown hold'), 409: problem('already released') },
+  } },
+  '/api/v1/uploads': {
+    post: {
+      summary: 'Check a CSV or XLSX file of runs: a dry run, nothing is stored', security: uploaders, form: 'UploadForm',
+      responses: {
+        201: { description: 'checked: the report', schema: 'UploadReport' },
+        200: { description: 'this file was sent before with the same options: that upload', schema: 'UploadReport' },
+        202: { description: 'a file of 100,000 rows or more, checked in the background: poll GET /api/v1/uploads/{id}', schema: 'UploadReport' },
+        400: problem('not one file in the field file'), 413: problem('the file is above 128 MB'),
+        422: problem('an option, the header or the CSV structure is wrong, named by field or by row and column'),
+      },
+    },
+    get: { summary: 'The latest uploads, newest first', security: uploaders, query: 'UploadListQuery', responses: { 200: { description: 'uploads', schema: 'UploadList' } } },
+  },
+  '/api/v1/uploads/{id}': { get: {
+    summary: 'One upload with the first problems and runs of its report', security: uploaders, params: ['id'], query: 'UploadReportQuery',
+    responses: { 200: { description: 'the upload', schema: 'UploadReport' }, 404: problem('unknown upload') },
+  } },
+  '/api/v1/uploads/{id}/commit': { post: {
+    summary: 'Store every valid run of a checked upload through ingest, in the background (audited)', security: uploaders, params: ['id'],
+    responses: {
+      202: { description: 'committing: poll GET /api/v1/uploads/{id} until status is committed or failed', schema: 'UploadReport' },
+      200: { description: 'committed before: that result', schema: 'UploadReport' },
+      404: problem('unknown upload'), 409: problem('still being checked, or no finished dry run'),
+    },
   } },
 };
 
@@ -85,6 +115,7 @@ export function buildOpenApiDocument(tokenUrl: string) {
         ...queryParameters(op.query ? inputs[op.query] as Record<string, unknown> : undefined),
       ],
       ...(op.body ? { requestBody: { required: true, content: { 'application/json': { schema: ref(op.body) } } } } : {}),
+      ...(op.form ? { requestBody: { required: true, content: { 'multipart/form-data': { schema: ref(op.form) } } } } : {}),
       responses: Object.fromEntries(Object.entries(op.responses).map(([status, r]) => [status, {
         description: r.description, ...(r.schema ? { content: { 'application/json': { schema: ref(r.schema) } } } : {}),
       }])),
@@ -92,9 +123,9 @@ export function buildOpenApiDocument(tokenUrl: string) {
   )]));
   return {
     openapi: '3.1.0',
-    info: { title: 'Fluxtrail station and record API', version: '1.0.0', description: 'Test stands post runs with OAuth2 client-credentials tokens; people read records with their session.' },
+    info: { title: 'Fluxtrail station and record API', version: '1.0.0', description: 'Test stands post runs with OAuth2 client-credentials tokens; people read records and upload result files with their session.' },
     components: {
-      schemas: { ...componentSchemas('output'), ...Object.fromEntries(['TestRunDocument', 'ReasonBody', 'ReworkNoteBody'].map((id) => [id, inputs[id]])) },
+      schemas: { ...componentSchemas('output'), ...Object.fromEntries(['TestRunDocument', 'ReasonBody', 'ReworkNoteBody', 'UploadForm'].map((id) => [id, inputs[id]])) },
       securitySchemes: {
         stationToken: { type: 'oauth2', flows: { clientCredentials: { tokenUrl, scopes: { 'test-runs:write': 'post test runs', 'records:read': 'read records' } } } },
         session: { type: 'apiKey', in: 'cookie', name: 'fluxtrail.sid' },

@@ -171,8 +171,12 @@ const stationFields = z.object({
   reason,
 });
 export const stationCreateSchema = stationFields.extend({ code: upperCode(32), calibrationDue: isoDate });
-/** The due date moves only by recording a calibration, so the history explains every change. */
-export const stationUpdateSchema = stationFields;
+/**
+ * The code is the station's identity on every run, so an edit replaces everything else. Moving
+ * the due date here (a correction, or a stand taken out of use) needs a reason, checked by the
+ * service against the stored date; a new calibration is recorded with its certificate instead.
+ */
+export const stationUpdateSchema = stationFields.extend({ calibrationDue: isoDate });
 export type StationCreateInput = z.infer<typeof stationCreateSchema>;
 export type StationUpdateInput = z.infer<typeof stationUpdateSchema>;
 

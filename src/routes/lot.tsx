@@ -37,6 +37,16 @@ export default function LotRoute() {
   }
 
   const record = lot.data;
+  // One active manual hold per lot (the server refuses a second), so the button gives way to a pointer.
+  const manualHold = record.holds.find((hold) => hold.kind === 'manual' && !hold.releasedAt);
+  const holdAction = manualHold ? (
+    <p className="text-sm text-graphite-600">
+      On manual hold since <span className="figures">{formatDate(manualHold.placedAt)}</span> (hold{' '}
+      <span className="figures">{manualHold.id}</span>); see Holds below.
+    </p>
+  ) : (
+    <PlaceLotHoldButton lotCode={record.code} />
+  );
   return (
     <article className="space-y-8">
       <PageHeader
@@ -47,7 +57,7 @@ export default function LotRoute() {
             <span className="figures">{formatDate(record.createdAt)}</span>
           </>
         }
-        actions={canPlace ? <PlaceLotHoldButton lotCode={record.code} /> : null}
+        actions={canPlace ? holdAction : null}
       />
       <LotCountsSummary counts={record.counts} large />
       <Part title="Component lots">

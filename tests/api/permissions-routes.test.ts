@@ -16,9 +16,14 @@ let plant: PlantFixture;
 let serial: string;
 let server: RunningServer;
 
-/** A fresh active hold for each release attempt, so every role meets the same situation. */
+/**
+ * A fresh active hold for each release attempt, so every role meets the same situation; on a
+ * motor of its own, since a motor carries one active manual hold at a time.
+ */
 async function freshHoldId() {
-  const hold = await placeHold(server.db, { target: { type: 'motor', serial }, kind: 'manual', reason: 'Held for the permission table', actor: { name: 'test', role: null } });
+  const document = runDocument(plant);
+  await ingestTestRun(server.db, document);
+  const hold = await placeHold(server.db, { target: { type: 'motor', serial: document.serial }, kind: 'manual', reason: 'Held for the permission table', actor: { name: 'test', role: null } });
   return `/api/v1/holds/${hold.id}/release`;
 }
 

@@ -35,6 +35,37 @@ describe('Setup API: stations, calibration and station clients', () => {
     expect(parsed(audit[1].after_json)).toMatchObject({ calibrationDue: day(365) });
   });
 
+  it('when admin edits a station and moves its due date with a reason, then it is saved and audited and the calibration history stays as it was', async () => {
+    await admin.post(`${setupApi}/stations`, demoStation('EOL-71', day(200))).expect(201);
+    await admin.post(`${setupApi}/stations/EOL-71/calibrations`, { calibratedOn: day(-10), due: day(355), certificate: 'CAL-2026-0555' }).expect(201);
+    const historyBefore = (await admin.get(`${setupApi}/stations/EOL-71/calibrations`).expect(200)).body.calibrations;
+    const edited = await admin.put(`${setupApi}/stations/EOL-71`, {
+      name: 'Pack-out stand 71', line: 'L3', kind: 'eol-dc', active: true, calibrationDue: day(-1),
+      reason: 'Reference shunt found damaged; stand out of calibration until re-certified',
+    }).expect(200);
+    expect(edited.body.station).toEqual({
+      code: 'EOL-71', name: 'Pack-out stand 71', line: 'L3', kind: 'eol-dc', active: true, calibrationDue: day(-1), calibrationState: 'expired',
+    });
+    expect((await admin.get(`${setupApi}/stations/EOL-71/calibrations`).expect(200)).body.calibrations).toEqual(historyBefore);
+    const audit = await auditOf(server.db, 'station', 'EOL-71');
+    expect(audit.map((e) => e.action)).toEqual(['station.created', 'station.calibration_recorded', 'station.updated']);
+    expect(parsed(audit[2].before_json)).toMatchObject({ name: 'End-of-line stand EOL-71', line: 'L2', calibrationDue: day(355), calibrationState: 'valid' });
+    expect(parsed(audit[2].after_json)).toMatchObject({ name: 'Pack-out stand 71', line: 'L3', calibrationDue: day(-1), calibrationState: 'expired' });
+    expect(audit[2].reason).toBe('Reference shunt found damaged; stand out of calibration until re-certified');
+  });
+
+  it('when the due date moves without a reason, then 422 names reason and nothing changes; other edits need none', async () => {
+    await admin.post(`${setupApi}/stations`, demoStation('EOL-72', day(90))).expect(201);
+    const moved = await admin.put(`${setupApi}/stations/EOL-72`, { ...demoStation('EOL-72', day(400)), code: undefined, reason: ' ' }).expect(422);
+    expect(moved.body.error.fields).toEqual([{ field: 'reason', message: 'Say why the calibration due date moves without a recorded calibration' }]);
+    const stored = await server.db('stations').where({ code: 'EOL-72' }).first();
+    expect(stored.calibration_due.toISOString().slice(0, 10)).toBe(day(90));
+    const renamed = await admin.put(`${setupApi}/stations/EOL-72`, { ...demoStation('EOL-72', day(90)), code: undefined, name: 'Stand 72' }).expect(200);
+    expect(renamed.body.station).toMatchObject({ name: 'Stand 72', calibrationDue: day(90) });
+    const missing = await admin.put(`${setupApi}/stations/EOL-72`, { name: 'Stand 72', line: 'L2', kind: 'eol-pmsm', active: true }).expect(422);
+    expect(missing.body.error.fields).toContainEqual(expect.objectContaining({ field: 'calibrationDue' }));
+  });
+
   it('when stations are listed, then an expired and a soon-due calibration are told apart from a valid one', async () => {
     await admin.post(`${setupApi}/stations`, demoStation('EOL-31', day(-1))).expect(201);
     await admin.post(`${setupApi}/stations`, demoStation('EOL-32', day(5))).expect(201);
@@ -74,10 +105,12 @@ describe('Setup API: stations, calibration and station clients', () => {
     for (const login of ['quality', 'operator', 'manager', 'auditor']) {
       const agent = await signedIn(server.url, login);
       expect((await agent.post(`${setupApi}/stations`, demoStation('EOL-62', day(60)))).status, login).toBe(403);
+      expect((await agent.put(`${setupApi}/stations/EOL-61`, { ...demoStation('EOL-61', day(-5)), code: undefined, reason: 'no' })).status, login).toBe(403);
       expect((await agent.post(`${setupApi}/stations/EOL-61/calibrations`, { calibratedOn: day(0), due: day(30), certificate: null })).status, login).toBe(403);
       expect((await agent.post(`${setupApi}/station-clients`, { clientId: 'demo-station-b', stationCode: 'EOL-61' })).status, login).toBe(403);
     }
     expect(await server.db('stations').where({ code: 'EOL-62' }).first()).toBeUndefined();
+    expect((await server.db('stations').where({ code: 'EOL-61' }).first()).calibration_due.toISOString().slice(0, 10)).toBe(day(60));
     expect(await server.db('station_calibrations').where({ station_id: (await server.db('stations').where({ code: 'EOL-61' }).first()).id })).toEqual([]);
   });
 });

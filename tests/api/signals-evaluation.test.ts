@@ -100,6 +100,29 @@ describe('signals opened on ingest, containment and closing', () => {
     expect(await server.db('audit_events').where({ action: 'signal.contained', entity_id: String(signal.id) }).count({ n: '*' })).toEqual([{ n: 1 }]);
   });
 
+  it('when motors already carry a manual hold and another signal\'s hold, then containment still holds them for this signal and closing releases only its own', async () => {
+    await freezeBaseline();
+    const [first, second] = await ingest([51, 50.05]);
+    const [earlier] = await signals();
+    await post(`/api/v1/signals/${earlier.id}/contain`, quality).expect(200);
+    await post(`/api/v1/motors/${first}/holds`, quality, { reason: 'Noise at 3000 rpm' }).expect(201);
+    await ingest(inControl);
+    const [third] = await ingest([49]);
+    // Retested after the new violation, the first motor falls within the new signal's scope too.
+    await ingestTestRun(server.db, { ...document(50.05), serial: first });
+    const later = (await signals()).at(-1)!;
+    expect(later.id).not.toBe(earlier.id);
+    const contained = await post(`/api/v1/signals/${later.id}/contain`, quality).expect(200);
+    expect(contained.body.heldSerials.sort()).toEqual([first, third].sort());
+    const heldByLater = await server.db('holds').join('motors', 'motors.id', 'holds.motor_id').where({ 'holds.signal_id': later.id }).whereNull('holds.released_at').pluck('motors.serial');
+    expect(heldByLater.sort()).toEqual([first, third].sort());
+    const disposition = { cause: 'stand fixture loose', actionTaken: 'fixture re-torqued', outcome: 'released' };
+    await post(`/api/v1/signals/${later.id}/close`, quality, disposition).expect(200);
+    expect(await server.db('holds').where({ signal_id: earlier.id }).whereNull('released_at').count({ n: '*' })).toEqual([{ n: 2 }]);
+    expect(await server.db('motors').where({ serial: third }).first('status')).toEqual({ status: 'passed' });
+    for (const serial of [first, second]) expect(await server.db('motors').where({ serial }).first('status')).toEqual({ status: 'on hold' });
+  });
+
   it('when a contained signal is closed as released, then its holds are released; only quality may close', async () => {
     await freezeBaseline();
     await ingest([51, 50.05]);

@@ -158,6 +158,21 @@ describe('station API: plan, station and run ingest', () => {
     expect(audit[0].reason).toBe(holds[0].reason);
   });
 
+  it('when a held motor is retested on a stand still out of calibration, then the run is stored and the one calibration hold stays', async () => {
+    await server.db('stations').where({ id: plant.station.id }).update({ calibration_due: '2020-01-31' });
+    const first = runDocument(plant);
+    await post(first).expect(201);
+    const retest = runDocument(plant, { serial: first.serial });
+    expect((await post(retest).expect(201)).body).toMatchObject({ attempt: 2, verdict: 'pass' });
+    expect(await server.db('test_runs').where({ run_uuid: retest.runId }).first()).toMatchObject({ attempt: 2, calibration_ok: 0 });
+    const motor = await server.db('motors').where({ serial: first.serial }).first();
+    expect(motor.status).toBe('on hold');
+    const holds = await server.db('holds').where({ motor_id: motor.id });
+    expect(holds).toHaveLength(1);
+    expect(holds[0]).toMatchObject({ kind: 'calibration', released_at: null });
+    expect(await server.db('audit_events').where({ action: 'hold.placed' }).count({ n: '*' })).toEqual([{ n: 1 }]);
+  });
+
   it('when the calibration falls due on the day of the run, then the run is in calibration', async () => {
     const document = runDocument(plant);
     await server.db('stations').where({ id: plant.station.id }).update({ calibration_due: document.startedAt.slice(0, 10) });

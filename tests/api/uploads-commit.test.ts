@@ -5,6 +5,7 @@ import { startApiServer } from '../support/api-server.js';
 import { truncateAll } from '../support/migrate.js';
 import { signIn } from '../support/sign-in.js';
 import { createPlant, nextSerial, type PlantFixture } from '../factories.js';
+import { uploadListSchema } from '../../server/openapi/upload-response-schemas.js';
 import { commitAndWait, demoValues, longCsv, plantTime, postUpload, wideCsv, wideXlsx, type RunSpec } from './uploads-support.js';
 
 describe('result uploads: commit', () => {
@@ -83,6 +84,7 @@ describe('result uploads: commit', () => {
     expect((await storedRuns()).map((r) => r.serial)).toEqual([runs[0].serial, runs[2].serial]);
     expect(await server.db('motors').where({ serial: 'XX-not-a-serial' }).first()).toBeUndefined();
     const list = await request(server.url).get('/api/v1/uploads').set('cookie', quality).expect(200);
+    uploadListSchema.strict().parse(list.body);
     expect(list.body.items).toMatchObject([{ id: dry.body.id, fileName: 'mixed.csv', status: 'committed', runs: { stored: 2, invalid: 1 } }]);
   });
 

@@ -4,6 +4,7 @@ import request from 'supertest';
 import ExcelJS from 'exceljs';
 import { expect } from 'vitest';
 import type { PlantFixture } from '../factories.js';
+import { uploadReportSchema } from '../../server/openapi/upload-response-schemas.js';
 
 export type UploadFields = { format: 'long' | 'wide'; delimiter?: 'comma' | 'semicolon' | 'tab'; decimal?: '.' | ',' };
 
@@ -58,19 +59,24 @@ function quote(cell: string, delimiter: string): string {
   return cell.includes(delimiter) || cell.includes('"') || /[\r\n]/.test(cell) ? `"${cell.replace(/"/g, '""')}"` : cell;
 }
 
+/** Every successful answer of the upload routes is the report the OpenAPI document describes. */
+export function expectReport(response: { status: number; body: unknown }) {
+  if (response.status < 300) uploadReportSchema.strict().parse(response.body);
+}
+
 /** POST /api/v1/uploads as multipart form data. */
 export function postUpload(appUrl: string, cookie: string, file: { bytes: Buffer | string; name: string }, fields: UploadFields) {
   const req = request(appUrl).post('/api/v1/uploads').set('cookie', cookie).set('x-fluxtrail-csrf', '1')
     .field('format', fields.format).field('delimiter', fields.delimiter ?? 'comma').field('decimal', fields.decimal ?? '.').field('mode', 'dry-run');
-  return req.attach('file', Buffer.isBuffer(file.bytes) ? file.bytes : Buffer.from(file.bytes, 'utf8'), file.name);
+  return req.attach('file', Buffer.isBuffer(file.bytes) ? file.bytes : Buffer.from(file.bytes, 'utf8'), file.name).expect(expectReport);
 }
 
 /** Commits an upload and polls it until the background pass has ended. */
 export async function commitAndWait(appUrl: string, cookie: string, id: number) {
-  const started = await request(appUrl).post(`/api/v1/uploads/${id}/commit`).set('cookie', cookie).set('x-fluxtrail-csrf', '1');
+  const started = await request(appUrl).post(`/api/v1/uploads/${id}/commit`).set('cookie', cookie).set('x-fluxtrail-csrf', '1').expect(expectReport);
   expect([200, 202]).toContain(started.status);
   for (let i = 0; i < 200; i++) {
-    const view = await request(appUrl).get(`/api/v1/uploads/${id}`).set('cookie', cookie).expect(200);
+    const view = await request(appUrl).get(`/api/v1/uploads/${id}`).set('cookie', cookie).expect(200).expect(expectReport);
     if (view.body.status === 'committed' || view.body.status === 'failed') return { started, view: view.body };
     await new Promise((r) => setTimeout(r, 50));
   }

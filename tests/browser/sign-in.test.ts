@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, inject, it } from 'vitest';
-import { openBrowser, screenshot, signInAs, type BrowserSession } from '../support/browser.js';
+import { openBrowser, screenshot, signInAs, submitSignIn, type BrowserSession } from '../support/browser.js';
 import { testPorts } from '../support/ports.js';
 
 describe('signing in through the IdP fake in Chromium', () => {
@@ -25,7 +25,7 @@ describe('signing in through the IdP fake in Chromium', () => {
 
   it('when the password is wrong, then the IdP form refuses it with a message', async () => {
     const { page } = browser;
-    await signInAs(page, appUrl, 'operator', 'wrong-password');
+    await submitSignIn(page, appUrl, 'operator', 'wrong-password');
     await expect.poll(() => page.getByText('Wrong login or password.').isVisible()).toBe(true);
     expect(new URL(page.url()).port).toBe(String(testPorts.browserIdp));
   });

@@ -12,7 +12,8 @@ describe('a quality engineer answers an SPC signal of the demo drifting lot', ()
     await signInAs(page, appUrl, 'quality');
     await expect.poll(() => page.getByRole('navigation', { name: 'Screens' }).getByRole('link', { name: 'Signals' }).count()).toBe(1);
     await page.goto(`${appUrl}/signals`);
-    await page.getByRole('button', { name: 'Open', exact: true }).click();
+    // The button reads "Open" until the count of open signals arrives, then "Open (3)".
+    await page.getByRole('button', { name: /^Open( \(\d+\))?$/ }).click();
     const firstSignal = page.getByRole('link', { name: /^Signal \d+/ }).first();
     await firstSignal.waitFor();
     await screenshot(page, 'signals-inbox');

@@ -24,13 +24,23 @@ export async function openBrowser(): Promise<BrowserSession> {
   };
 }
 
-/** Signs in through the app's sign-in page and the IdP's own form, as a person would. */
-export async function signInAs(page: Page, appUrl: string, login: string, password = 'fluxtrail') {
+/** Goes from the app's sign-in page to the IdP's own form and submits it, as a person would. */
+export async function submitSignIn(page: Page, appUrl: string, login: string, password: string) {
   await page.goto(`${appUrl}/`);
   await page.getByRole('link', { name: /sign in/i }).or(page.getByRole('button', { name: /sign in/i })).first().click();
   await page.locator('input[name="login"]').fill(login);
   await page.locator('input[name="password"]').fill(password);
   await page.getByRole('button', { name: /sign in/i }).click();
+}
+
+/**
+ * Signs in and returns once the app knows who is signed in (its top bar offers to sign out): on
+ * a busy machine the way back from the IdP takes seconds, longer than a test's short polls for
+ * the landing screen.
+ */
+export async function signInAs(page: Page, appUrl: string, login: string, password = 'fluxtrail') {
+  await submitSignIn(page, appUrl, login, password);
+  await page.getByRole('link', { name: 'Sign out' }).waitFor();
 }
 
 /** Screenshots for people to look at, kept under .data/screenshots. */

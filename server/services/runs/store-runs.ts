@@ -129,7 +129,8 @@ async function insertMeasurements(trx: Knex.Transaction, stored: ReadonlyArray<S
 async function holdForCalibration(trx: Knex.Transaction, run: RunToStore): Promise<void> {
   const { document, station } = run;
   await placeHold(trx, {
-    target: { type: 'motor', serial: document.serial }, kind: 'calibration', at: run.receivedAt,
+    // A retest on an overdue stand keeps the hold already placed; the run itself records its calibration state.
+    target: { type: 'motor', serial: document.serial }, kind: 'calibration', at: run.receivedAt, ifAlreadyHeld: 'keep',
     actor: { name: `station ${station.code}`, role: null },
     reason: `Tested on station ${station.code} on ${document.startedAt.slice(0, 10)}, after its calibration fell due on ${station.calibrationDue}; retest on a calibrated station or disposition the run.`,
   });

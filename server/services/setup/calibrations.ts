@@ -5,6 +5,7 @@ import type { CalibrationInput } from '../../schemas/setup.js';
 import { recordAudit } from '../audit/record-audit.js';
 import { actorOf, isoDay, reasonOf } from './actor.js';
 import { findStationRow, toStation } from './stations.js';
+import { changeReferenceData } from './change-reference-data.js';
 
 type CalibrationRow = { id: number; station_id: number; calibrated_on: Date; due: Date; certificate: string | null; recorded_by: string; recorded_at: Date };
 
@@ -29,7 +30,7 @@ export async function listCalibrations(db: Knex, stationCode: string) {
  */
 export async function recordCalibration(db: Knex, user: SessionUser, stationCode: string, input: CalibrationInput, now = new Date()) {
   if (input.calibratedOn > isoDay(now)) throw invalid([{ field: 'calibratedOn', message: 'Must not be in the future' }]);
-  return db.transaction(async (trx) => {
+  return changeReferenceData(db, async (trx) => {
     const row = await findStationRow(trx, stationCode, { lock: true });
     const before = toStation(row, now);
     const [id] = await trx('station_calibrations').insert({

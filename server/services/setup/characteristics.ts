@@ -5,6 +5,7 @@ import type { CharacteristicCreateInput, CharacteristicUpdateInput } from '../..
 import { recordAudit } from '../audit/record-audit.js';
 import { actorOf, reasonOf } from './actor.js';
 import { findProductRow } from './product-rows.js';
+import { changeReferenceData } from './change-reference-data.js';
 
 export type CharacteristicRow = {
   id: number; product_id: number; code: string; name: string; unit: string; test_step: string;
@@ -52,7 +53,7 @@ async function findCharacteristicRow(db: Knex, productId: number, code: string, 
 }
 
 export async function createCharacteristic(db: Knex, user: SessionUser, productCode: string, input: CharacteristicCreateInput, now = new Date()) {
-  return db.transaction(async (trx) => {
+  return changeReferenceData(db, async (trx) => {
     const product = await findProductRow(trx, productCode, { lock: true });
     const taken = await trx('characteristics').where({ product_id: product.id, code: input.code }).first();
     if (taken) throw conflict(`Product ${productCode} already has a characteristic ${input.code}.`, [{ field: 'code', message: 'Already in use' }]);
@@ -69,7 +70,7 @@ export async function createCharacteristic(db: Knex, user: SessionUser, productC
 export async function updateCharacteristic(
   db: Knex, user: SessionUser, productCode: string, code: string, input: CharacteristicUpdateInput, now = new Date(),
 ) {
-  return db.transaction(async (trx) => {
+  return changeReferenceData(db, async (trx) => {
     const product = await findProductRow(trx, productCode, { lock: true });
     const before = toCharacteristic(await findCharacteristicRow(trx, product.id, code, productCode));
     await trx('characteristics').where({ product_id: product.id, code }).update(columns(input));

@@ -5,6 +5,7 @@ import type { ProductCreateInput, ProductUpdateInput } from '../../schemas/setup
 import { recordAudit } from '../audit/record-audit.js';
 import { actorOf, reasonOf } from './actor.js';
 import { findProductRow, productColumns, toProduct, type ProductRow } from './product-rows.js';
+import { changeReferenceData } from './change-reference-data.js';
 
 export async function listProducts(db: Knex) {
   const rows = await db<ProductRow>('products').orderBy('code');
@@ -16,7 +17,7 @@ export async function getProduct(db: Knex, code: string) {
 }
 
 export async function createProduct(db: Knex, user: SessionUser, input: ProductCreateInput, now = new Date()) {
-  return db.transaction(async (trx) => {
+  return changeReferenceData(db, async (trx) => {
     const taken = await trx('products').where({ code: input.code }).first();
     if (taken) throw conflict(`A product with the code ${input.code} exists already.`, [{ field: 'code', message: 'Already in use' }]);
     await trx('products').insert({ code: input.code, ...productColumns(input), created_at: now });
@@ -30,7 +31,7 @@ export async function createProduct(db: Knex, user: SessionUser, input: ProductC
 }
 
 export async function updateProduct(db: Knex, user: SessionUser, code: string, input: ProductUpdateInput, now = new Date()) {
-  return db.transaction(async (trx) => {
+  return changeReferenceData(db, async (trx) => {
     const before = toProduct(await findProductRow(trx, code, { lock: true }));
     await trx('products').where({ code }).update(productColumns(input));
     const after = toProduct(await findProductRow(trx, code));

@@ -5,6 +5,7 @@ import type { StationClientInput } from '../../schemas/setup.js';
 import { recordAudit } from '../audit/record-audit.js';
 import { actorOf, reasonOf } from './actor.js';
 import type { StationRow } from './stations.js';
+import { changeReferenceData } from './change-reference-data.js';
 
 type Binding = { clientId: string; stationCode: string };
 
@@ -23,7 +24,7 @@ export async function listStationClients(db: Knex): Promise<Binding[]> {
 
 /** Binds a client id to a station, moving it if it was bound elsewhere (the move is audited). */
 export async function bindStationClient(db: Knex, user: SessionUser, input: StationClientInput, now = new Date()) {
-  return db.transaction(async (trx) => {
+  return changeReferenceData(db, async (trx) => {
     const station = await trx<StationRow>('stations').where({ code: input.stationCode }).forUpdate().first();
     if (!station) throw invalid([{ field: 'stationCode', message: `No station with the code ${input.stationCode}` }]);
     const before = await findBinding(trx, input.clientId);
@@ -39,7 +40,7 @@ export async function bindStationClient(db: Knex, user: SessionUser, input: Stat
 }
 
 export async function unbindStationClient(db: Knex, user: SessionUser, clientId: string, reason: string | undefined, now = new Date()) {
-  return db.transaction(async (trx) => {
+  return changeReferenceData(db, async (trx) => {
     const before = await findBinding(trx, clientId);
     if (!before) throw notFound(`The client ${clientId} is not bound to any station.`);
     await trx('station_clients').where({ client_id: clientId }).delete();

@@ -1,9 +1,10 @@
 import type { Knex } from 'knex';
 import type { SessionUser } from '../../auth/session.js';
-import { conflict, notFound } from '../../errors.js';
+import { conflict, invalid, notFound } from '../../errors.js';
 import type { StationCreateInput, StationUpdateInput } from '../../schemas/setup.js';
 import { recordAudit } from '../audit/record-audit.js';
 import { actorOf, isoDay, reasonOf } from './actor.js';
+import { changeReferenceData } from './change-reference-data.js';
 
 export type StationRow = { id: number; code: string; line: string; kind: string; name: string; calibration_due: Date; active: number | boolean };
 export type CalibrationState = 'valid' | 'due-soon' | 'expired';
@@ -40,7 +41,7 @@ export async function listStations(db: Knex, now = new Date()) {
 }
 
 export async function createStation(db: Knex, user: SessionUser, input: StationCreateInput, now = new Date()) {
-  return db.transaction(async (trx) => {
+  return changeReferenceData(db, async (trx) => {
     if (await trx('stations').where({ code: input.code }).first()) {
       throw conflict(`A station with the code ${input.code} exists already.`, [{ field: 'code', message: 'Already in use' }]);
     }
@@ -56,10 +57,19 @@ export async function createStation(db: Knex, user: SessionUser, input: StationC
   });
 }
 
+/**
+ * Edits a station. The calibration history is never touched: a due date moved here stands beside
+ * it with its reason in the audit trail, which is why that move must give one.
+ */
 export async function updateStation(db: Knex, user: SessionUser, code: string, input: StationUpdateInput, now = new Date()) {
-  return db.transaction(async (trx) => {
+  return changeReferenceData(db, async (trx) => {
     const before = toStation(await findStationRow(trx, code, { lock: true }), now);
-    await trx('stations').where({ code }).update({ line: input.line, kind: input.kind, name: input.name, active: input.active });
+    if (input.calibrationDue !== before.calibrationDue && !reasonOf(input.reason)) {
+      throw invalid([{ field: 'reason', message: 'Say why the calibration due date moves without a recorded calibration' }]);
+    }
+    await trx('stations').where({ code }).update({
+      line: input.line, kind: input.kind, name: input.name, active: input.active, calibration_due: input.calibrationDue,
+    });
     const after = toStation(await findStationRow(trx, code), now);
     await recordAudit(trx, {
       actor: actorOf(user), action: 'station.updated', entityType: 'station', entityId: code,

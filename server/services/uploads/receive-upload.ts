@@ -28,6 +28,10 @@ export function storedFile(dataDir: string, row: { file_sha256: string; file_typ
 
 export const isStale = (heartbeat: Date | null) => !heartbeat || Date.now() - heartbeat.getTime() > STALE_PASS_MS;
 
+/** The same test in SQL: a pass that is checking or committing with no live process behind it. */
+export const whereInterrupted = (q: Knex.QueryBuilder) => q.whereIn('status', ['checking', 'committing'])
+  .where((h) => h.whereNull('heartbeat_at').orWhere('heartbeat_at', '<', new Date(Date.now() - STALE_PASS_MS)));
+
 /**
  * Receives a file and dry-runs it. The file is kept under its SHA-256 (the commit reads it again)
  * and the upload is keyed by that hash and the reading options: the same file sent again answers
@@ -38,7 +42,9 @@ export async function receiveUpload(db: Knex, dataDir: string, user: SessionUser
   const fileType = sniffFileType(file.bytes, file.name);
   const uploadKey = createHash('sha256').update(`${fileSha256}\u0000${canonicalJson(options)}`).digest('hex');
   const earlier = await db('uploads').where({ upload_key: uploadKey }).first('id', 'status', 'heartbeat_at');
-  const busy = earlier && (earlier.status === 'checking' || earlier.status === 'committing') && !isStale(earlier.heartbeat_at);
+  // A commit under way, or interrupted and waiting to be taken up again, is never checked afresh:
+  // a new check would drop the report's record of the runs the commit has stored.
+  const busy = earlier && (earlier.status === 'committing' || (earlier.status === 'checking' && !isStale(earlier.heartbeat_at)));
   if (earlier && (earlier.status === 'committed' || busy)) return { status: 200 as const, body: await getUpload(db, earlier.id) };
 
   const stored = { file_sha256: fileSha256, file_type: fileType, options_json: JSON.stringify(options) };

@@ -8,12 +8,18 @@ import { surveyRuns } from './survey-runs.js';
 /** Runs per chunk: each chunk's outcomes and the upload's progress are written before the next. */
 const CHUNK_RUNS = 100;
 
+/** Thrown between chunks when the process is shutting down; the upload is handed back, not failed. */
+export class PassStopped extends Error {
+  constructor() { super('upload pass stopped for a shutdown'); }
+}
+
 /**
  * One pass over an uploaded file: `check` (the dry run) or `commit`. The file is read as a stream,
  * run by run, in chunks; after each chunk its outcomes, problems and the progress are written to
  * the upload, so a poller sees a large file advance and a crashed pass can be taken up again.
+ * When `stop` is aborted the pass ends after the chunk it is in (PassStopped).
  */
-export async function runUploadPass(db: Knex, uploadId: number, file: UploadFile, mode: 'check' | 'commit'): Promise<void> {
+export async function runUploadPass(db: Knex, uploadId: number, file: UploadFile, mode: 'check' | 'commit', stop?: AbortSignal): Promise<void> {
   // A commit taken up again keeps the runs an earlier attempt stored; everything else is redone.
   const stale = db('upload_runs').where({ upload_id: uploadId });
   await (mode === 'commit' ? stale.whereNot({ outcome: 'stored' }) : stale).delete();
@@ -28,6 +34,7 @@ export async function runUploadPass(db: Knex, uploadId: number, file: UploadFile
     rowsDone += chunk.reduce((sum, p) => sum + p.run.rowCount, 0);
     await db('uploads').where({ id: uploadId }).update({ progress: rowsTotal === 0 ? 1 : Math.min(1, rowsDone / rowsTotal), heartbeat_at: new Date() });
     chunk = [];
+    if (stop?.aborted) throw new PassStopped();
   };
   for await (const run of runsOf(rows, layout, file.options)) {
     chunk.push(prepare(run, repeats.get(run.runId)));

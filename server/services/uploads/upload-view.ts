@@ -6,7 +6,8 @@ export type UploadRow = {
   id: number; file_name: string; file_sha256: string; file_type: 'csv' | 'xlsx'; format: 'long' | 'wide'; options_json: string;
   uploaded_by: string; uploaded_by_name: string; status: 'checking' | 'dry-run' | 'committing' | 'committed' | 'failed';
   rows_total: number; rows_ok: number; rows_failed: number; runs_new: number; runs_stored: number; runs_duplicate: number; runs_invalid: number;
-  progress: number; error: string | null; created_at: Date; checked_at: Date | null; committed_by_name: string | null; committed_at: Date | null; heartbeat_at: Date | null;
+  progress: number; error: string | null; created_at: Date; checked_at: Date | null; committed_by_name: string | null; committed_by_role: string | null;
+  committed_at: Date | null; heartbeat_at: Date | null;
 };
 
 /** How an upload is shown: its state and counts; the report (problems, runs) is added by getUpload. */

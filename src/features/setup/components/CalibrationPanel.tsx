@@ -8,22 +8,28 @@ import { Spinner } from '../../../components/Spinner';
 import { formatDate, formatDateTime } from '../../../lib/format';
 import { useCalibrations } from '../api/get-calibrations';
 import { useRecordCalibration } from '../api/record-calibration';
+import { todayIso } from './ExpiredDueNote';
 import { Field, inputClass } from './form-parts';
 
 type Values = z.input<typeof calibrationSchema>;
-const today = () => new Date().toISOString().slice(0, 10);
 
-/** Records a calibration (admins) and shows the station's calibration history. */
-export function CalibrationPanel({ stationCode, canManage }: { stationCode: string; canManage: boolean }) {
+type CalibrationPanelProps = { stationCode: string; calibrationDue: string; canManage: boolean };
+
+/**
+ * Records a calibration (admins) and shows the station's calibration history. A due date moved by
+ * editing the station differs from the latest certificate's; the panel says so rather than let the
+ * history look as if it explained the date in force.
+ */
+export function CalibrationPanel({ stationCode, calibrationDue, canManage }: CalibrationPanelProps) {
   const history = useCalibrations(stationCode);
   const record = useRecordCalibration(stationCode);
   const { register, handleSubmit, reset, formState: { errors } } = useForm<Values, unknown, z.output<typeof calibrationSchema>>({
     resolver: zodResolver(calibrationSchema),
-    defaultValues: { calibratedOn: today(), due: '', certificate: '', reason: '' },
+    defaultValues: { calibratedOn: todayIso(), due: '', certificate: '', reason: '' },
   });
   const onSubmit = handleSubmit(async (values) => {
     await record.mutateAsync({ ...values, certificate: values.certificate || null });
-    reset({ calibratedOn: today(), due: '', certificate: '', reason: '' });
+    reset({ calibratedOn: todayIso(), due: '', certificate: '', reason: '' });
   });
   const id = (name: string) => `calibration-${stationCode}-${name}`;
 
@@ -49,6 +55,12 @@ export function CalibrationPanel({ stationCode, canManage }: { stationCode: stri
       ) : null}
       {history.isPending ? <Spinner label="Loading the history…" /> : null}
       {history.isError ? <ErrorNote error={history.error} title="Could not load the calibration history" /> : null}
+      {history.data?.[0] && history.data[0].due !== calibrationDue ? (
+        <p role="note" className="text-sm text-graphite-700">
+          The due date in force, <span className="figures">{formatDate(calibrationDue)}</span>, was set by editing the station
+          (its reason is in the audit trail); the latest recorded calibration gave <span className="figures">{formatDate(history.data[0].due)}</span>.
+        </p>
+      ) : null}
       {history.data ? (
         <table className="w-full text-left text-sm">
           <caption className="mb-1 text-left text-xs font-medium uppercase tracking-wide text-graphite-600">Calibration history of {stationCode}</caption>
