@@ -9,6 +9,7 @@ import { ingestTestRun } from '../../server/services/runs/ingest-test-run.js';
 import { jsonColumn } from '../../server/db/json-column.js';
 import { freshState, phaseTwoStep, type SpcStateData } from '../../server/services/spc/phase-two-step.js';
 import { AppError } from '../../server/errors.js';
+import { statementPool } from '../../server/db/knex.js';
 import { createPlant, createProduct, nextSerial, runDocument, type PlantFixture } from '../factories.js';
 
 // Stands post concurrently; the writer stores the runs that arrive together in one transaction.
@@ -108,6 +109,13 @@ describe('ingest of runs posted at the same time', () => {
     expect(motor).toEqual({ attempts: 3, latest_run_id: runs[2].id, status: outcomes.find((o) => o.body.attempt === 3)!.body.verdict === 'pass' ? 'passed' : 'failed' });
     const filed = await server.db('yield_motors').join('motors', 'motors.id', 'yield_motors.motor_id').where('motors.serial', serial).first('yield_motors.attempts', 'first_run_id');
     expect(filed).toEqual({ attempts: 3, first_run_id: runs[0].id });
+  });
+
+  it('when two statements are sent in one query, then only the ingest writer\'s pool runs them', async () => {
+    // The app's pool keeps one statement per query, so a mistake elsewhere can never chain statements.
+    await expect(server.db.raw('SELECT 1 AS one; SELECT 2 AS two')).rejects.toMatchObject({ code: 'ER_PARSE_ERROR' });
+    const [results] = await statementPool(server.db)!.raw('SELECT 1 AS one; SELECT 2 AS two');
+    expect(results).toEqual([[{ one: 1 }], [{ two: 2 }]]);
   });
 
   it('when a revision was approved after this process last read the revisions, then the run is judged by it', async () => {

@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import type { Statement } from '../../db/statements.js';
 
 /**
  * A motor's status, the one rule: on hold while any hold on the motor or on its lot is active;
@@ -10,22 +11,42 @@ import type { Knex } from 'knex';
 const activeHold = `(EXISTS (SELECT 1 FROM holds h WHERE h.motor_id = motors.id AND h.released_at IS NULL)
   OR EXISTS (SELECT 1 FROM holds h WHERE h.lot_id = motors.lot_id AND h.released_at IS NULL))`;
 
-export type LatestRun = { motorId: number; runId: number; attempt: number; stationId: number; finishedAt: Date; verdict: 'pass' | 'fail' };
+/** What a stored run changes on its motor. */
+export type MotorRun = {
+  serial: string; productId: number; lotId: number; stationId: number; finishedAt: Date; receivedAt: Date; verdict: 'pass' | 'fail';
+};
 
 /**
- * Points each motor at the run just stored for it and sets its status from that run's verdict and
- * the active holds: one statement for a whole ingest batch (the motors are already locked).
+ * Creates or updates the motor row of each run of an ingest batch in one statement and returns
+ * each row (id, serial, product and lot as stored, and its attempt count including this run). The
+ * row leaves it with its last test, station and status, the columns the motors list is indexed by,
+ * so that pointing it at the new run later changes no index (pointMotorsAtRunsStatement). New and
+ * existing rows are locked either way, so runs of one serial count attempts one after the other.
  */
-export async function recordLatestRuns(trx: Knex.Transaction, runs: readonly LatestRun[]): Promise<void> {
-  if (runs.length === 0) return;
-  const latest = runs.map(() => 'SELECT ? AS id, ? AS attempts, ? AS run_id, ? AS station_id, ? AS finished_at, ? AS verdict').join(' UNION ALL ');
-  await trx.raw(
-    `UPDATE motors JOIN (${latest}) AS latest ON latest.id = motors.id
-     SET motors.attempts = latest.attempts, motors.latest_run_id = latest.run_id, motors.last_station_id = latest.station_id,
-         motors.last_tested_at = latest.finished_at,
+export function motorsForRunsStatement(runs: readonly MotorRun[]): Statement {
+  const lotHeld = 'EXISTS (SELECT 1 FROM holds h WHERE h.lot_id = ? AND h.released_at IS NULL)';
+  return {
+    sql: `INSERT INTO motors (serial, product_id, lot_id, status, attempts, created_at, last_tested_at, last_station_id)
+     VALUES ${runs.map(() => `(?, ?, ?, (SELECT CASE WHEN ${lotHeld} THEN 'on hold' WHEN ? = 'pass' THEN 'passed' ELSE 'failed' END), 1, ?, ?, ?)`).join(', ')}
+     ON DUPLICATE KEY UPDATE attempts = attempts + 1, last_tested_at = VALUES(last_tested_at), last_station_id = VALUES(last_station_id),
+       status = IF(EXISTS (SELECT 1 FROM holds h WHERE h.motor_id = motors.id AND h.released_at IS NULL), 'on hold', VALUES(status))
+     RETURNING id, serial, product_id, lot_id, attempts`,
+    bindings: runs.flatMap((run) => [run.serial, run.productId, run.lotId, run.lotId, run.verdict, run.receivedAt, run.finishedAt, run.stationId]),
+  };
+}
+
+/**
+ * Points each motor at the run just stored for it, and sets its status again from that run's
+ * final verdict and the active holds (unchanged unless the run was judged again in the batch).
+ */
+export function pointMotorsAtRunsStatement(runs: ReadonlyArray<{ motorId: number; runId: number; verdict: 'pass' | 'fail' }>): Statement {
+  const latest = runs.map(() => 'SELECT ? AS id, ? AS run_id, ? AS verdict').join(' UNION ALL ');
+  return {
+    sql: `UPDATE motors JOIN (${latest}) AS latest ON latest.id = motors.id
+     SET motors.latest_run_id = latest.run_id,
          motors.status = CASE WHEN ${activeHold} THEN 'on hold' WHEN latest.verdict = 'pass' THEN 'passed' ELSE 'failed' END`,
-    runs.flatMap((run) => [run.motorId, run.attempt, run.runId, run.stationId, run.finishedAt, run.verdict]),
-  );
+    bindings: runs.flatMap((run) => [run.motorId, run.runId, run.verdict]),
+  };
 }
 
 export type MotorScope = { motorId: number } | { lotId: number };

@@ -1,17 +1,18 @@
 import type { Knex } from 'knex';
 import { invalid } from '../../errors.js';
-import { readApprovedRevisions, revisionInForce, withLimits } from './limits-in-force.js';
+import { revisionInForce, withLimits } from './limits-in-force.js';
+import type { ApprovedRevision } from './reference-data.js';
 import { judgeRun } from './judge-run.js';
 import type { RunToStore } from './store-runs.js';
 
 /**
- * Inside the ingest transaction: reads the approved revisions of the batch's products once and
+ * Inside the ingest transaction, with the approved revisions of the batch's products as read there:
  * makes sure each run is judged by the revision in force at its start. A run judged before an
  * approval that now applies to it is judged again here; one left with no revision in force is
- * refused, as it would have been had the approval come first.
+ * refused, as it would have been had the approval come first. Returns the runs judged again.
  */
-export async function confirmLimitsInForce(trx: Knex.Transaction, runs: RunToStore[]): Promise<void> {
-  const revisions = await readApprovedRevisions(trx, [...new Set(runs.map((run) => run.product.id))]);
+export async function confirmLimitsInForce(trx: Knex.Transaction, runs: RunToStore[], revisions: ReadonlyMap<number, ApprovedRevision[]>): Promise<RunToStore[]> {
+  const judgedAgain: RunToStore[] = [];
   for (const run of runs) {
     const inForce = revisionInForce(revisions.get(run.product.id) ?? [], new Date(run.document.startedAt));
     if (inForce?.id === run.limitSet.id) continue;
@@ -20,5 +21,7 @@ export async function confirmLimitsInForce(trx: Knex.Transaction, runs: RunToSto
     }
     run.limitSet = await withLimits(trx, inForce);
     run.judged = judgeRun(run.results, run.product, run.limitSet.limits);
+    judgedAgain.push(run);
   }
+  return judgedAgain;
 }

@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { runStatements, type Statement } from '../../db/statements.js';
 import { knownApprovedRevisions, loadApprovedLimits, rememberApprovedRevisions, type ApprovedRevision, type LimitRow } from './reference-data.js';
 
 export type LimitSetInForce = { id: number; revision: number; effectiveFrom: Date; limits: Map<number, LimitRow> };
@@ -8,16 +9,29 @@ export type LimitSetInForce = { id: number; revision: number; effectiveFrom: Dat
 // inside its transaction (confirm-limits.ts), re-judging a run whose revision changed meanwhile;
 // so an approval takes effect at once without a query per run.
 
-/** Reads the approved revisions of these products (one query) and keeps them for the next runs. */
-export async function readApprovedRevisions(db: Knex, productIds: readonly number[]): Promise<Map<number, ApprovedRevision[]>> {
-  const rows: Array<{ id: number; product_id: number; revision: number; effective_from: Date }> = await db('limit_sets')
+type RevisionRow = { id: number; product_id: number; revision: number; effective_from: Date };
+
+/** The query for the approved revisions of these products, newest first. */
+export function approvedRevisionsStatement(db: Knex, productIds: readonly number[]): Statement {
+  return db('limit_sets')
     .whereIn('product_id', productIds).andWhere({ status: 'approved' })
     .orderBy([{ column: 'effective_from', order: 'desc' }, { column: 'revision', order: 'desc' }])
-    .select('id', 'product_id', 'revision', 'effective_from');
+    .select('id', 'product_id', 'revision', 'effective_from')
+    .toSQL();
+}
+
+/** Each product's approved revisions from that query's rows, kept for the next runs of this process. */
+export function rememberRevisionRows(productIds: readonly number[], rows: readonly RevisionRow[]): Map<number, ApprovedRevision[]> {
   const read = new Map<number, ApprovedRevision[]>(productIds.map((id) => [id, []]));
   for (const row of rows) read.get(row.product_id)?.push({ id: row.id, revision: row.revision, effectiveFrom: row.effective_from });
   for (const [productId, revisions] of read) rememberApprovedRevisions(productId, revisions);
   return read;
+}
+
+/** Reads the approved revisions of these products (one query) and keeps them for the next runs. */
+export async function readApprovedRevisions(db: Knex, productIds: readonly number[]): Promise<Map<number, ApprovedRevision[]>> {
+  const [rows] = await runStatements(db, [approvedRevisionsStatement(db, productIds)]);
+  return rememberRevisionRows(productIds, rows as RevisionRow[]);
 }
 
 /** The revision in force at a moment: the latest effectiveFrom not after it (then the higher revision). */

@@ -1,6 +1,7 @@
 import type { Knex } from 'knex';
 import { answerForRetry, type IngestOutcome } from './stored-run.js';
 import { storeRuns, type RunToStore } from './store-runs.js';
+import { statementPool } from '../../db/knex.js';
 
 /** A batch stays well inside one packet and one short transaction. */
 const maxRunsPerBatch = 32;
@@ -49,7 +50,12 @@ class RunWriter {
   private writingCount = 0;
   private gatherTimer: NodeJS.Timeout | undefined;
 
-  constructor(private readonly db: Knex) {}
+  /** Writes go through the multi-statement pool beside the app's pool, where there is one. */
+  private readonly db: Knex;
+
+  constructor(db: Knex) {
+    this.db = statementPool(db) ?? db;
+  }
 
   store(run: RunToStore): Promise<IngestOutcome> {
     return new Promise((resolve, reject) => {

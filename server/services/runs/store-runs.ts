@@ -1,11 +1,13 @@
 import type { Knex } from 'knex';
 import { invalid } from '../../errors.js';
 import type { ResultInput, TestRunDocument, TestRunResponse } from '../../schemas/test-run.js';
-import { recordLatestRuns } from '../motors/refresh-motor-status.js';
+import { motorsForRunsStatement, pointMotorsAtRunsStatement } from '../motors/refresh-motor-status.js';
+import { runStatements, type Statement } from '../../db/statements.js';
 import { placeHold } from '../holds/place-hold.js';
-import { evaluateSpcAfterIngest } from '../spc/evaluate-after-ingest.js';
-import { updateYieldRollups } from '../yield/update-yield-rollups.js';
-import type { LimitSetInForce } from './limits-in-force.js';
+import { spcStateLockStatement, spcStatementsAfterIngest, type SpcStateRow } from '../spc/evaluate-after-ingest.js';
+import { yieldStatementsAfterIngest } from '../yield/update-yield-rollups.js';
+import { shiftCalendarFromRows, shiftCalendarStatement } from '../yield/shift-calendar.js';
+import { approvedRevisionsStatement, rememberRevisionRows, type LimitSetInForce } from './limits-in-force.js';
 import type { judgeRun } from './judge-run.js';
 import type { ProductRef } from './reference-data.js';
 import type { StationRef } from './station-of-client.js';
@@ -24,63 +26,65 @@ type LockedMotor = { id: number; serial: string; product_id: number; lot_id: num
 
 /**
  * Writes a batch of checked runs of distinct serials in the caller's transaction and returns each
- * run's answer, in the order given. Every table gets one statement for the whole batch, so hot
- * rows (SPC state, display blocks, yield counters) are locked once per batch rather than once per
- * run. Lock order, as in every ingest: motor rows (by serial) → runs and measurements → motor
- * status → SPC state and display blocks → yield rollups → calibration holds and their audit.
- * Throws when any run cannot be stored (a serial of another product or lot, a runId already
- * taken): the caller rolls back and stores the runs one by one to give each its own answer.
+ * run's answer, in the order given. Every table gets one statement for the whole batch, and the
+ * statements travel in three round trips (runStatements): reads and the motor rows; the runs and
+ * the SPC state they lock; every other write. Hot rows (SPC state, display blocks, yield counters)
+ * are thus locked once per batch, for a short time. Lock order, as in every ingest: motor rows (by
+ * serial) → runs → SPC state → measurements, motor pointers, display blocks → yield rollups →
+ * calibration holds and their audit. Throws when any run cannot be stored (a serial of another
+ * product or lot, a runId already taken): the caller rolls back and stores the runs one by one.
  */
 export async function storeRuns(trx: Knex.Transaction, runs: RunToStore[]): Promise<TestRunResponse[]> {
-  await confirmLimitsInForce(trx, runs);
-  const motors = await lockOrCreateMotors(trx, runs);
+  const bySerial = [...runs].sort((a, b) => (a.document.serial < b.document.serial ? -1 : a.document.serial > b.document.serial ? 1 : 0));
+  const productIds = [...new Set(runs.map((run) => run.product.id))];
+  const [revisionRows, calendarRows, motorRows] = await runStatements(trx, [
+    approvedRevisionsStatement(trx, productIds),
+    shiftCalendarStatement,
+    motorsForRunsStatement(bySerial.map((run) => ({
+      serial: run.document.serial, productId: run.product.id, lotId: run.lotId, stationId: run.station.id,
+      finishedAt: new Date(run.document.finishedAt), receivedAt: run.receivedAt, verdict: run.judged.verdict,
+    }))),
+  ]) as [Parameters<typeof rememberRevisionRows>[1], Parameters<typeof shiftCalendarFromRows>[0], LockedMotor[]];
+  const motors = checkedMotors(runs, motorRows);
+  await confirmLimitsInForce(trx, runs, rememberRevisionRows(productIds, revisionRows));
+
   const stored = runs.map((run) => {
     const motor = motors.get(run.document.serial) as LockedMotor;
-    const attempt = motor.attempts + 1;
     // The calibration due date is a plant calendar date, so compare it with the stand's local date.
     const calibrationOk = run.station.calibrationDue >= run.document.startedAt.slice(0, 10);
     const response: TestRunResponse = {
-      runId: run.document.runId, serial: run.document.serial, attempt, verdict: run.judged.verdict, limitRevision: run.limitSet.revision,
+      runId: run.document.runId, serial: run.document.serial, attempt: motor.attempts, verdict: run.judged.verdict, limitRevision: run.limitSet.revision,
       results: run.judged.results.map(({ characteristicId: _id, ...result }) => result),
     };
-    return { run, motorId: motor.id, attempt, calibrationOk, response, runId: 0 };
+    return { run, motorId: motor.id, attempt: motor.attempts, calibrationOk, response, runId: 0 };
   });
-
-  const inserted = await insertRuns(trx, stored);
-  for (const s of stored) s.runId = inserted.get(s.run.document.runId) as number;
-  await insertMeasurements(trx, stored);
+  const characteristicIds = [...new Set(runs.flatMap((run) => run.judged.results.map((r) => r.characteristicId)))].sort((a, b) => a - b);
+  const [runRows, stateRows] = await runStatements(trx, [insertRunsStatement(stored), spcStateLockStatement(trx, characteristicIds)]) as [Array<{ id: number | string; run_uuid: string }>, SpcStateRow[]];
+  const runIds = new Map(runRows.map((row) => [row.run_uuid, Number(row.id)]));
+  for (const s of stored) s.runId = runIds.get(s.run.document.runId) as number;
   for (const s of stored) await storeWaveformsAndReadings(trx, s.runId, s.run.raw);
-  await recordLatestRuns(trx, stored.map((s) => ({
-    motorId: s.motorId, runId: s.runId, attempt: s.attempt, stationId: s.run.station.id,
-    finishedAt: new Date(s.run.document.finishedAt), verdict: s.run.judged.verdict,
-  })));
-  await evaluateSpcAfterIngest(trx, stored.map((s) => ({
+
+  const spc = await spcStatementsAfterIngest(trx, stored.map((s) => ({
     runId: s.runId, motorId: s.motorId, lotId: s.run.lotId, productId: s.run.product.id, startedAt: s.run.document.startedAt,
     receivedAt: s.run.receivedAt, measurements: s.run.judged.results,
-  })));
-  await updateYieldRollups(trx, stored.map((s) => ({
+  })), stateRows);
+  const yieldRollups = await yieldStatementsAfterIngest(trx, stored.map((s) => ({
     motorId: s.motorId, runId: s.runId, attempt: s.attempt, startedAt: new Date(s.run.document.startedAt), verdict: s.run.judged.verdict,
     productId: s.run.product.id, lotId: s.run.lotId, station: s.run.station,
     failingCharacteristicIds: s.run.judged.results.filter((r) => r.verdict === 'fail').map((r) => r.characteristicId),
-  })));
+  })), shiftCalendarFromRows(calendarRows));
+  await runStatements(trx, [
+    measurementsStatement(stored),
+    pointMotorsAtRunsStatement(stored.map((s) => ({ motorId: s.motorId, runId: s.runId, verdict: s.run.judged.verdict }))),
+    ...spc.statements,
+    ...yieldRollups,
+  ]);
   for (const s of stored.filter((one) => !one.calibrationOk)) await holdForCalibration(trx, s.run);
   return stored.map((s) => s.response);
 }
 
-/**
- * The batch's motor rows, created where new and locked either way, so that concurrent runs of one
- * serial count attempts one after the other. One statement: an insert that leaves existing rows
- * as they are (but locks them) and returns every row, new or old.
- */
-async function lockOrCreateMotors(trx: Knex.Transaction, runs: readonly RunToStore[]): Promise<Map<string, LockedMotor>> {
-  const bySerial = [...runs].sort((a, b) => (a.document.serial < b.document.serial ? -1 : a.document.serial > b.document.serial ? 1 : 0));
-  const [rows] = await trx.raw(
-    `INSERT INTO motors (serial, product_id, lot_id, status, attempts, created_at)
-     VALUES ${bySerial.map(() => "(?, ?, ?, 'not tested', 0, ?)").join(', ')}
-     ON DUPLICATE KEY UPDATE id = id
-     RETURNING id, serial, product_id, lot_id, attempts`,
-    bySerial.flatMap((run) => [run.document.serial, run.product.id, run.lotId, run.receivedAt]),
-  ) as [LockedMotor[]];
+/** Every run's motor row, as the batch found or made it: of the run's product and lot. */
+function checkedMotors(runs: readonly RunToStore[], rows: readonly LockedMotor[]): Map<string, LockedMotor> {
   const motors = new Map(rows.map((row) => [row.serial, { ...row, id: Number(row.id) }]));
   for (const run of runs) {
     const motor = motors.get(run.document.serial);
@@ -93,36 +97,34 @@ async function lockOrCreateMotors(trx: Knex.Transaction, runs: readonly RunToSto
 
 type StoredRun = { run: RunToStore; motorId: number; attempt: number; calibrationOk: boolean; response: TestRunResponse };
 
-/** The batch's test_runs rows; returns the id given to each runId. */
-async function insertRuns(trx: Knex.Transaction, stored: readonly StoredRun[]): Promise<Map<string, number>> {
+/** The batch's test_runs rows, returning the id given to each runId. */
+function insertRunsStatement(stored: readonly StoredRun[]): Statement {
   const columns = [
     'run_uuid', 'motor_id', 'station_id', 'lot_id', 'attempt', 'started_at', 'finished_at', 'operator_badge', 'program_version',
     'limit_set_id', 'verdict', 'calibration_ok', 'calibration_due', 'body_sha256', 'response_json', 'source', 'received_at',
   ];
-  const [rows] = await trx.raw(
-    `INSERT INTO test_runs (${columns.join(', ')})
+  return {
+    sql: `INSERT INTO test_runs (${columns.join(', ')})
      VALUES ${stored.map(() => `(${columns.map(() => '?').join(', ')})`).join(', ')}
      RETURNING id, run_uuid`,
-    stored.flatMap(({ run, motorId, attempt, calibrationOk, response }) => [
+    bindings: stored.flatMap(({ run, motorId, attempt, calibrationOk, response }) => [
       run.document.runId, motorId, run.station.id, run.lotId, attempt, new Date(run.document.startedAt), new Date(run.document.finishedAt),
       run.document.operatorBadge, run.document.programVersion, run.limitSet.id, run.judged.verdict, calibrationOk, run.station.calibrationDue,
       run.sha256, JSON.stringify(response), run.source, run.receivedAt,
     ]),
-  ) as [Array<{ id: number | string; run_uuid: string }>];
-  return new Map(rows.map((row) => [row.run_uuid, Number(row.id)]));
+  };
 }
 
-/** Every measurement of the batch in one statement (written as SQL: the builder's per-row objects cost more here). */
-async function insertMeasurements(trx: Knex.Transaction, stored: ReadonlyArray<StoredRun & { runId: number }>): Promise<void> {
-  const values: Array<number | string | null> = [];
+/** Every measurement of the batch in one statement. */
+function measurementsStatement(stored: ReadonlyArray<StoredRun & { runId: number }>): Statement {
+  const bindings: Array<number | string | null> = [];
   for (const { run, runId } of stored) {
-    for (const r of run.judged.results) values.push(runId, r.characteristicId, r.value, r.lsl, r.usl, r.verdict);
+    for (const r of run.judged.results) bindings.push(runId, r.characteristicId, r.value, r.lsl, r.usl, r.verdict);
   }
-  const rows = values.length / 6;
-  await trx.raw(
-    `INSERT INTO measurements (run_id, characteristic_id, value, lsl, usl, verdict) VALUES ${Array.from({ length: rows }, () => '(?, ?, ?, ?, ?, ?)').join(', ')}`,
-    values,
-  );
+  return {
+    sql: `INSERT INTO measurements (run_id, characteristic_id, value, lsl, usl, verdict) VALUES ${Array.from({ length: bindings.length / 6 }, () => '(?, ?, ?, ?, ?, ?)').join(', ')}`,
+    bindings,
+  };
 }
 
 /** A run from a station whose calibration had expired is kept, flagged, and holds its motor. */

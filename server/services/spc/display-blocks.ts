@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import type { Statement } from '../../db/statements.js';
 
 /** Run ids per display block: small enough that a window's ragged edges are cheap to read raw. */
 export const blockRunSpan = 256;
@@ -10,13 +11,13 @@ export type DisplayBlock = { blockNo: number; firstRunId: number; lastRunId: num
 export type DisplayPoint = { runId: number; characteristicId: number; value: number };
 
 /**
- * Adds freshly stored values to the display summary, inside the ingest transaction: one multi-row
- * upsert per batch of runs, the values of each (characteristic, block) summed first. Rows go in
- * (characteristic, block) order so concurrent ingests that share a block lock its rows in the same
- * order and queue, not deadlock.
+ * The statement that adds freshly stored values to the display summary, inside the ingest
+ * transaction: one multi-row upsert per batch of runs, the values of each (characteristic, block)
+ * summed first. Rows go in (characteristic, block) order so concurrent ingests that share a block
+ * lock its rows in the same order and queue, not deadlock. Null when there is nothing to add.
  */
-export async function recordDisplayBlocks(trx: Knex.Transaction, points: readonly DisplayPoint[]): Promise<void> {
-  if (points.length === 0) return;
+export function displayBlocksStatement(points: readonly DisplayPoint[]): Statement | null {
+  if (points.length === 0) return null;
   const blocks = new Map<string, { characteristicId: number; blockNo: number; first: number; last: number; n: number; sum: number; sumSq: number; min: number; max: number }>();
   for (const { runId, characteristicId, value } of points) {
     const blockNo = blockOf(runId);
@@ -35,14 +36,14 @@ export async function recordDisplayBlocks(trx: Knex.Transaction, points: readonl
     block.max = Math.max(block.max, value);
   }
   const sorted = [...blocks.values()].sort((a, b) => a.characteristicId - b.characteristicId || a.blockNo - b.blockNo);
-  await trx.raw(
-    `INSERT INTO spc_display_blocks (characteristic_id, block_no, first_run_id, last_run_id, n, sum, sum_sq, min_value, max_value)
+  return {
+    sql: `INSERT INTO spc_display_blocks (characteristic_id, block_no, first_run_id, last_run_id, n, sum, sum_sq, min_value, max_value)
      VALUES ${sorted.map(() => '(?,?,?,?,?,?,?,?,?)').join(',')}
      ON DUPLICATE KEY UPDATE first_run_id = LEAST(first_run_id, VALUES(first_run_id)), last_run_id = GREATEST(last_run_id, VALUES(last_run_id)),
        n = n + VALUES(n), sum = sum + VALUES(sum), sum_sq = sum_sq + VALUES(sum_sq),
        min_value = LEAST(min_value, VALUES(min_value)), max_value = GREATEST(max_value, VALUES(max_value))`,
-    sorted.flatMap((b) => [b.characteristicId, b.blockNo, b.first, b.last, b.n, b.sum, b.sumSq, b.min, b.max]),
-  );
+    bindings: sorted.flatMap((b) => [b.characteristicId, b.blockNo, b.first, b.last, b.n, b.sum, b.sumSq, b.min, b.max]),
+  };
 }
 
 /**

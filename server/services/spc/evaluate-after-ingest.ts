@@ -1,7 +1,8 @@
 import { jsonColumn } from '../../db/json-column.js';
 import type { Knex } from 'knex';
 import { openSignal } from '../signals/open-signal.js';
-import { recordDisplayBlocks } from './display-blocks.js';
+import { displayBlocksStatement } from './display-blocks.js';
+import type { Statement } from '../../db/statements.js';
 import { phaseTwoStep, type SpcStateData } from './phase-two-step.js';
 import type { SignalRule } from './chart-kinds.js';
 
@@ -12,47 +13,41 @@ export type IngestedRun = {
   measurements: ReadonlyArray<{ characteristicId: number; value: number }>;
 };
 
-export type SpcOutcome = { openedSignalIds: number[] };
+export type SpcStateRow = { characteristic_id: number; control_limit_id: number; state_json: string | SpcStateData };
 
-type StateRow = { characteristic_id: number; control_limit_id: number; state_json: string | SpcStateData };
+/**
+ * The locking read of the SPC state of these characteristics, in key order so that concurrent
+ * ingests queue instead of deadlocking. Characteristics without frozen limits (or with SPC off)
+ * have no row here and cost nothing. Not a locking read of characteristics: the subquery is read
+ * consistently, only spc_state is locked.
+ */
+export function spcStateLockStatement(db: Knex, characteristicIds: readonly number[]): Statement {
+  return db('spc_state')
+    .whereIn('characteristic_id', characteristicIds.length > 0 ? characteristicIds : [0])
+    .whereExists((q) => q.select(db.raw('1')).from('characteristics').whereRaw('characteristics.id = spc_state.characteristic_id').andWhere('spc_enabled', true))
+    .orderBy('characteristic_id')
+    .forUpdate()
+    .select('characteristic_id', 'control_limit_id', 'state_json')
+    .toSQL();
+}
 
 /**
  * Judges freshly stored runs (one ingest batch) against the frozen control limits of the
- * characteristics they touched, inside the ingest transaction. One locked read of their spc_state
- * rows (in key order, so concurrent ingests queue instead of deadlocking), each characteristic's
- * values stepped through in run order, and one batched write back; signals only when a rule is
- * broken. A rule broken again at the next plotted point continues its episode; broken after an
- * in-control point it opens a new signal. Characteristics without frozen limits have no spc_state
- * row and cost nothing; every characteristic's value also joins the chart's display summary.
+ * characteristics they touched, inside the ingest transaction, given their spc_state rows as
+ * locked by spcStateLockStatement: each characteristic's values are stepped through in run order;
+ * signals only when a rule is broken (opened at once, rare). A rule broken again at the next plotted
+ * point continues its episode; broken after an in-control point it opens a new signal. Returns the
+ * statements that write the new states, the continued episodes and every value's place in the
+ * chart's display summary, to be sent together with the batch's other writes.
  */
-export async function evaluateSpcAfterIngest(trx: Knex.Transaction, runs: readonly IngestedRun[]): Promise<SpcOutcome> {
+export async function spcStatementsAfterIngest(trx: Knex.Transaction, runs: readonly IngestedRun[], stateRows: readonly SpcStateRow[]): Promise<{ statements: Statement[]; openedSignalIds: number[] }> {
   const inRunOrder = [...runs].sort((a, b) => a.runId - b.runId);
-  const outcome = await judgeAgainstFrozenLimits(trx, inRunOrder);
-  // After the spc_state locks, so every ingest takes its locks in the same order.
-  await recordDisplayBlocks(trx, inRunOrder.flatMap((run) => run.measurements.map((m) => ({ runId: run.runId, characteristicId: m.characteristicId, value: m.value }))));
-  return outcome;
-}
-
-type Episodes = { openedSignalIds: number[]; continued: Array<{ signal_id: number; run_id: number }> };
-
-async function judgeAgainstFrozenLimits(trx: Knex.Transaction, runs: readonly IngestedRun[]): Promise<SpcOutcome> {
-  const characteristicIds = [...new Set(runs.flatMap((run) => run.measurements.map((m) => m.characteristicId)))];
-  if (characteristicIds.length === 0) return { openedSignalIds: [] };
-  const rows: StateRow[] = await trx('spc_state')
-    .whereIn('characteristic_id', characteristicIds)
-    // Not a locking read of characteristics: a subquery is read consistently, only spc_state is locked.
-    .whereExists((q) => q.select(trx.raw('1')).from('characteristics').whereRaw('characteristics.id = spc_state.characteristic_id').andWhere('spc_enabled', true))
-    .orderBy('characteristic_id')
-    .forUpdate()
-    .select('characteristic_id', 'control_limit_id', 'state_json');
-  if (rows.length === 0) return { openedSignalIds: [] };
-
   const episodes: Episodes = { openedSignalIds: [], continued: [] };
   const updates = [];
-  for (const row of rows) {
+  for (const row of stateRows) {
     let state = jsonColumn<SpcStateData>(row.state_json);
     let last: IngestedRun | undefined;
-    for (const run of runs) {
+    for (const run of inRunOrder) {
       const measured = run.measurements.find((m) => m.characteristicId === row.characteristic_id);
       if (!measured) continue;
       state = await judgeOneValue(trx, row, state, run, measured.value, episodes);
@@ -61,14 +56,19 @@ async function judgeAgainstFrozenLimits(trx: Knex.Transaction, runs: readonly In
     if (!last) continue;
     updates.push({ characteristic_id: row.characteristic_id, control_limit_id: row.control_limit_id, state_json: JSON.stringify(state), last_run_id: last.runId, updated_at: last.receivedAt });
   }
-  if (episodes.continued.length > 0) await trx('signal_points').insert(episodes.continued).onConflict(['signal_id', 'run_id']).ignore();
-  if (updates.length > 0) await trx('spc_state').insert(updates).onConflict('characteristic_id').merge(['state_json', 'last_run_id', 'updated_at']);
-  return { openedSignalIds: episodes.openedSignalIds };
+  const statements: Statement[] = [];
+  if (episodes.continued.length > 0) statements.push(trx('signal_points').insert(episodes.continued).onConflict(['signal_id', 'run_id']).ignore().toSQL());
+  if (updates.length > 0) statements.push(trx('spc_state').insert(updates).onConflict('characteristic_id').merge(['state_json', 'last_run_id', 'updated_at']).toSQL());
+  const display = displayBlocksStatement(inRunOrder.flatMap((run) => run.measurements.map((m) => ({ runId: run.runId, characteristicId: m.characteristicId, value: m.value }))));
+  if (display) statements.push(display);
+  return { statements, openedSignalIds: episodes.openedSignalIds };
 }
+
+type Episodes = { openedSignalIds: number[]; continued: Array<{ signal_id: number; run_id: number }> };
 
 /** One Phase II step of one characteristic: the next state, with a signal opened or continued per broken rule. */
 async function judgeOneValue(
-  trx: Knex.Transaction, row: StateRow, state: SpcStateData, run: IngestedRun, value: number, out: Episodes,
+  trx: Knex.Transaction, row: SpcStateRow, state: SpcStateData, run: IngestedRun, value: number, out: Episodes,
 ): Promise<SpcStateData> {
   const step = phaseTwoStep(state, { runId: run.runId, lotId: run.lotId, value });
   const next = step.state;

@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { runStatements, type Statement } from '../../db/statements.js';
 import { offsetMinutes } from './plant-time.js';
 
 export type Shift = { code: string; name: string; startsMinute: number };
@@ -17,15 +18,18 @@ export const defaultShiftCalendar: ShiftCalendar = {
 
 type CalendarRow = { time_zone: string | null; first_pass_target: number | null; code: string | null; name: string | null; starts_minute: number | null };
 
-/** The calendar in force, in one query (ingest reads it in every batch): settings beside each shift. */
-export async function readShiftCalendar(db: Knex): Promise<ShiftCalendar> {
-  const [rows] = await db.raw(
-    `SELECT settings.time_zone, settings.first_pass_target, shifts.code, shifts.name, shifts.starts_minute
-       FROM (SELECT 1 AS one) AS base
-       LEFT JOIN yield_settings AS settings ON settings.id = 1
-       LEFT JOIN plant_shifts AS shifts ON TRUE
-      ORDER BY shifts.starts_minute`,
-  ) as [CalendarRow[]];
+/** The calendar in force in one query (ingest reads it in every batch): the settings beside each shift. */
+export const shiftCalendarStatement: Statement = {
+  sql: `SELECT settings.time_zone, settings.first_pass_target, shifts.code, shifts.name, shifts.starts_minute
+          FROM (SELECT 1 AS one) AS base
+          LEFT JOIN yield_settings AS settings ON settings.id = 1
+          LEFT JOIN plant_shifts AS shifts ON TRUE
+         ORDER BY shifts.starts_minute`,
+  bindings: [],
+};
+
+/** The calendar from that query's rows; the defaults where nothing is set. */
+export function shiftCalendarFromRows(rows: readonly CalendarRow[]): ShiftCalendar {
   const shifts = rows.filter((row) => row.code !== null);
   return {
     timeZone: rows[0]?.time_zone ?? defaultShiftCalendar.timeZone,
@@ -34,6 +38,11 @@ export async function readShiftCalendar(db: Knex): Promise<ShiftCalendar> {
       ? shifts.map((s) => ({ code: s.code as string, name: s.name as string, startsMinute: s.starts_minute as number }))
       : defaultShiftCalendar.shifts,
   };
+}
+
+export async function readShiftCalendar(db: Knex): Promise<ShiftCalendar> {
+  const [rows] = await runStatements(db, [shiftCalendarStatement]);
+  return shiftCalendarFromRows(rows as CalendarRow[]);
 }
 
 export const shiftsInOrder = (calendar: ShiftCalendar) => [...calendar.shifts].sort((a, b) => a.startsMinute - b.startsMinute);

@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
-import { readShiftCalendar, slotOf } from './shift-calendar.js';
+import { readShiftCalendar, slotOf, type ShiftCalendar } from './shift-calendar.js';
+import type { Statement } from '../../db/statements.js';
 import { refileYieldRollups } from './recompute-shift-slots.js';
 
 export type StoredRunForYield = {
@@ -12,32 +13,35 @@ export type StoredRunForYield = {
  * Keeps the yield rollups current inside the ingest transaction (whose motor row locks order the
  * runs of one motor): a motor's first run files it under its day, shift, station and lot with its
  * failing characteristics; a later run only moves the final verdict, because a motor counts where
- * and when it was first tested. A batch of first runs is written with one statement per table,
- * the counters summed per group first and upserted in key order (so concurrent batches queue).
+ * and when it was first tested. Retests are applied at once (they are few); the first runs of a
+ * batch come back as statements, one per table, the counters summed per group first and upserted
+ * in key order (so concurrent batches queue), to be sent with the batch's other writes.
  */
-export async function updateYieldRollups(trx: Knex.Transaction, runs: readonly StoredRunForYield[]): Promise<void> {
+export async function yieldStatementsAfterIngest(trx: Knex.Transaction, runs: readonly StoredRunForYield[], calendar: ShiftCalendar): Promise<Statement[]> {
   for (const retest of runs.filter((run) => run.attempt > 1)) await moveFinalVerdict(trx, retest);
   const firsts = runs.filter((run) => run.attempt === 1);
-  if (firsts.length === 0) return;
-  const calendar = await readShiftCalendar(trx);
+  if (firsts.length === 0) return [];
   const filed = firsts.map((run) => {
     const slot = slotOf(calendar, run.startedAt);
     const group = { product_id: run.productId, lot_id: run.lotId, station_id: run.station.id, line: run.station.line, shift_day: slot.day };
     return { run, group, shiftCode: slot.shift, passed: run.verdict === 'pass' };
   });
-  await trx('yield_motors').insert(filed.map(({ run, group, shiftCode, passed }) => ({
-    ...group, motor_id: run.motorId, shift_code: shiftCode, first_run_id: run.runId, first_started_at: run.startedAt,
-    first_pass: passed, final_pass: passed, attempts: 1,
-  })));
-  await addToYieldCounts(trx, filed.map(({ group, shiftCode, passed }) => ({ ...group, shift_code: shiftCode, passed })));
+  const statements: Statement[] = [
+    trx('yield_motors').insert(filed.map(({ run, group, shiftCode, passed }) => ({
+      ...group, motor_id: run.motorId, shift_code: shiftCode, first_run_id: run.runId, first_started_at: run.startedAt,
+      first_pass: passed, final_pass: passed, attempts: 1,
+    }))).toSQL(),
+    yieldCountsStatement(filed.map(({ group, shiftCode, passed }) => ({ ...group, shift_code: shiftCode, passed }))),
+  ];
   const failures = filed.flatMap(({ run, group }) => [...new Set(run.failingCharacteristicIds)].map((characteristicId) => ({ ...group, motor_id: run.motorId, characteristic_id: characteristicId })));
-  if (failures.length > 0) await trx('yield_first_failures').insert(failures);
+  if (failures.length > 0) statements.push(trx('yield_first_failures').insert(failures).toSQL());
+  return statements;
 }
 
 type CountedMotor = { shift_day: string; shift_code: string; station_id: number; line: string; lot_id: number; product_id: number; passed: boolean };
 
 /** One upsert of the per-group counters, summed per primary key and sent in key order. */
-async function addToYieldCounts(trx: Knex.Transaction, motors: readonly CountedMotor[]): Promise<void> {
+function yieldCountsStatement(motors: readonly CountedMotor[]): Statement {
   const groups = new Map<string, { key: Omit<CountedMotor, 'passed'>; tested: number; passed: number }>();
   for (const { passed, ...key } of motors) {
     const id = JSON.stringify([key.shift_day, key.shift_code, key.station_id, key.line, key.lot_id, key.product_id]);
@@ -47,12 +51,12 @@ async function addToYieldCounts(trx: Knex.Transaction, motors: readonly CountedM
     groups.set(id, group);
   }
   const sorted = [...groups.values()].sort((a, b) => compareKeys(a.key, b.key));
-  await trx.raw(
-    `INSERT INTO yield_counts (shift_day, shift_code, station_id, line, lot_id, product_id, tested, passed_first, passed_final)
+  return {
+    sql: `INSERT INTO yield_counts (shift_day, shift_code, station_id, line, lot_id, product_id, tested, passed_first, passed_final)
      VALUES ${sorted.map(() => '(?, ?, ?, ?, ?, ?, ?, ?, ?)').join(', ')}
      ON DUPLICATE KEY UPDATE tested = tested + VALUES(tested), passed_first = passed_first + VALUES(passed_first), passed_final = passed_final + VALUES(passed_final)`,
-    sorted.flatMap(({ key, tested, passed }) => [key.shift_day, key.shift_code, key.station_id, key.line, key.lot_id, key.product_id, tested, passed, passed]),
-  );
+    bindings: sorted.flatMap(({ key, tested, passed }) => [key.shift_day, key.shift_code, key.station_id, key.line, key.lot_id, key.product_id, tested, passed, passed]),
+  };
 }
 
 function compareKeys(a: Omit<CountedMotor, 'passed'>, b: Omit<CountedMotor, 'passed'>): number {
