@@ -81,8 +81,10 @@ describe('evidence pack contents', () => {
   it('when the CSV is read, then it has one line per measurement matching the database, with formula-like text quoted', async () => {
     const rows = parseCsv(files.get(`fluxtrail-pack-${status.id}-measurements.csv`)!.toString('utf8'));
     expect(rows[0]).toEqual(['serial', 'run_id', 'attempt', 'characteristic', 'value', 'unit', 'lsl', 'usl', 'verdict', 'station', 'operator_badge', 'started_at_utc']);
+    // Product by product (code order), each product's runs by id, each run's results in test-plan order.
     const expected = await server.db({ ms: 'measurements' }).join({ c: 'characteristics' }, 'c.id', 'ms.characteristic_id')
-      .whereIn('ms.run_id', runs.map((r) => r.id)).orderBy([{ column: 'ms.run_id' }, { column: 'c.sort_order' }])
+      .join({ p: 'products' }, 'p.id', 'c.product_id')
+      .whereIn('ms.run_id', runs.map((r) => r.id)).orderBy([{ column: 'p.code' }, { column: 'ms.run_id' }, { column: 'c.sort_order' }])
       .select('ms.run_id', 'c.code', 'c.unit', 'ms.value', 'ms.lsl', 'ms.usl', 'ms.verdict');
     const byId = new Map(runs.map((r) => [r.id, r]));
     const quoteIfFormula = (text: string) => (/^[=+\-@]/.test(text) ? `'${text}` : text);

@@ -1,5 +1,5 @@
 import { RollingSheet, type CellValue } from './rolling-sheet.js';
-import type { SheetContext } from './pack-context.js';
+import { tabs, type SheetContext } from './pack-context.js';
 
 /** Plain-language lines for the filter, shared with the manifest's readers in mind. */
 export function describeFilter(filter: SheetContext['filter']): Array<[string, string]> {
@@ -17,7 +17,7 @@ export async function writeSummarySheet(ctx: SheetContext, csv: { name: string; 
   const sheet = new RollingSheet(ctx.workbook, 'Summary', [
     { header: 'Item', width: 28 },
     { header: 'Value', width: 70 },
-  ], ctx.rowCap);
+  ], ctx.rowCap, { tab: tabs.summary, selected: true });
   const { totals, origin } = ctx;
   const rows: Array<[string, CellValue]> = [
     ['Evidence pack', origin.packId],

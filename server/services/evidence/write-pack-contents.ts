@@ -1,0 +1,57 @@
+import type { Knex } from 'knex';
+import type { PackFilter } from './pack-filter.js';
+import { packSerials, type PackTotals } from './pack-scope.js';
+import { PackCsv, type CharacteristicFacts, type WrittenCsv } from './pack-csv.js';
+import type { WrittenFile, ZipEntry } from './zip-file.js';
+import { XlsxPackage } from './xlsx/xlsx-package.js';
+import type { PackOrigin, SheetContext } from './workbook/pack-context.js';
+import { writeSummarySheet } from './workbook/summary-sheet.js';
+import { writeMotorsSheet } from './workbook/motors-sheet.js';
+import { writeResultsSheets } from './workbook/results-sheets.js';
+import { writeLimitsSheet, writeStationsSheet } from './workbook/reference-sheets.js';
+import { writeHoldsSheet, writeSignalsSheet } from './workbook/holds-signals-sheets.js';
+import { writeAuditExtractSheet } from './workbook/audit-extract-sheet.js';
+
+export type ContentsInput = {
+  db: Knex;
+  filter: PackFilter;
+  totals: PackTotals;
+  origin: PackOrigin;
+  rowCap: number;
+  advance: (rows: number) => Promise<void>;
+  workbookPath: string;
+  csv: { name: string; entry: ZipEntry };
+};
+
+async function characteristicFacts(db: Knex): Promise<Map<number, CharacteristicFacts>> {
+  const rows = (await db('characteristics').select('id', 'code', 'unit', 'sort_order')) as Array<{ id: number; code: string; unit: string; sort_order: number }>;
+  return new Map(rows.map((c) => [Number(c.id), { code: c.code, unit: c.unit, sortOrder: Number(c.sort_order) }]));
+}
+
+/**
+ * The workbook (to a file) and the CSV (into its zip entry) from one read of the database: the
+ * Results sheets and the CSV are written from the same pages of runs. Each sheet is finished
+ * before the next begins, so memory stays flat; Summary is written last, as it carries the
+ * CSV's hash, yet stays the first tab.
+ */
+export async function writePackContents(input: ContentsInput): Promise<{ csv: WrittenCsv; workbook: WrittenFile }> {
+  const workbook = new XlsxPackage(input.workbookPath, { creator: `Fluxtrail ${input.origin.version}`, created: input.origin.requestedAt });
+  try {
+    let serials: Promise<string[]> | undefined;
+    const ctx: SheetContext = { ...input, workbook, serials: () => (serials ??= packSerials(input.db, input.filter)) };
+    const csv = new PackCsv(input.csv.entry, await characteristicFacts(input.db));
+    await writeResultsSheets(ctx, csv);
+    const csvFile = csv.finish();
+    await writeMotorsSheet(ctx);
+    await writeLimitsSheet(ctx);
+    await writeStationsSheet(ctx);
+    await writeHoldsSheet(ctx);
+    await writeSignalsSheet(ctx);
+    await writeAuditExtractSheet(ctx);
+    await writeSummarySheet(ctx, { name: input.csv.name, sha256: csvFile.sha256, rows: csvFile.rows });
+    return { csv: csvFile, workbook: await workbook.finish() };
+  } catch (error) {
+    await workbook.abort();
+    throw error;
+  }
+}
