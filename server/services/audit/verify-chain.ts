@@ -41,8 +41,9 @@ function contentMatches(prevHash: string, row: StoredRow): boolean {
   return auditHash(prevHash, { ...rest, before: parse(beforeJson), after: parse(afterJson) }) === row[11];
 }
 
-/** Pages of the chain read ahead while one is hashed, each on its own connection. */
-const readAhead = 1;
+/** Pages of the chain read ahead while one is hashed, each on its own connection (two helped most
+ * when MariaDB had to fetch the pages from disk after a restart). */
+const readAhead = 2;
 
 /**
  * Walks the whole chain in id order in pages (memory stays flat) and recomputes every hash.

@@ -10,7 +10,7 @@ import { writeMotorsSheet } from './workbook/motors-sheet.js';
 import { writeResultsSheets } from './workbook/results-sheets.js';
 import { writeLimitsSheet, writeStationsSheet } from './workbook/reference-sheets.js';
 import { writeHoldsSheet, writeSignalsSheet } from './workbook/holds-signals-sheets.js';
-import { writeAuditExtractSheet } from './workbook/audit-extract-sheet.js';
+import { auditEventIds, writeAuditExtractSheet } from './workbook/audit-extract-sheet.js';
 
 export type ContentsInput = {
   db: Knex;
@@ -39,17 +39,24 @@ export async function writePackContents(input: ContentsInput): Promise<{ csv: Wr
   try {
     let serials: Promise<string[]> | undefined;
     const ctx: SheetContext = { ...input, workbook, serials: () => (serials ??= packSerials(input.db, input.filter)) };
-    const csv = new PackCsv(input.csv.entry, await characteristicFacts(input.db));
-    await writeResultsSheets(ctx, csv);
-    const csvFile = csv.finish();
-    await writeMotorsSheet(ctx);
-    await writeLimitsSheet(ctx);
-    await writeStationsSheet(ctx);
-    await writeHoldsSheet(ctx);
-    await writeSignalsSheet(ctx);
-    await writeAuditExtractSheet(ctx);
-    await writeSummarySheet(ctx, { name: input.csv.name, sha256: csvFile.sha256, rows: csvFile.rows });
-    return { csv: csvFile, workbook: await workbook.finish() };
+    // Finding the audit events is index work for MariaDB alone: it runs beside the Results pass.
+    const auditIds = auditEventIds(ctx);
+    auditIds.catch(() => undefined); // awaited below; this only keeps an early failure from counting as unhandled
+    try {
+      const csv = new PackCsv(input.csv.entry, await characteristicFacts(input.db));
+      await writeResultsSheets(ctx, csv);
+      const csvFile = csv.finish();
+      await writeMotorsSheet(ctx);
+      await writeLimitsSheet(ctx);
+      await writeStationsSheet(ctx);
+      await writeHoldsSheet(ctx);
+      await writeSignalsSheet(ctx);
+      await writeAuditExtractSheet(ctx, await auditIds);
+      await writeSummarySheet(ctx, { name: input.csv.name, sha256: csvFile.sha256, rows: csvFile.rows });
+      return { csv: csvFile, workbook: await workbook.finish() };
+    } finally {
+      await auditIds.catch(() => undefined);
+    }
   } catch (error) {
     await workbook.abort();
     throw error;

@@ -46,24 +46,30 @@ function eventsById(db: Knex, ids: number[]): Promise<EventRow[]> {
 }
 
 /**
- * Every audit event about the pack's motors, lots, products, stations, limit revisions and
- * characteristics, oldest first. The events' ids come from the entity index alone; the rows are
- * then read by primary key in id order, which keeps MariaDB's page reads close together however
- * scattered a motor's events are.
+ * The ids of every audit event about the pack's motors, lots, products, stations, limit revisions
+ * and characteristics, oldest first, from the entity index alone. Index-only work for MariaDB, so
+ * it can run beside the writing of other sheets.
  */
-export async function writeAuditExtractSheet(ctx: SheetContext): Promise<void> {
+export async function auditEventIds(ctx: SheetContext): Promise<number[]> {
+  const ids = await eventIds(ctx.db, await referenceEntities(ctx));
+  const serials = await ctx.serials();
+  await eachPageReadAhead(Math.ceil(serials.length / serialPage),
+    (page) => eventIds(ctx.db, [['motor', serials.slice(page * serialPage, (page + 1) * serialPage)]]),
+    async (found) => { for (const id of found) ids.push(id); });
+  return ids.sort((a, b) => a - b);
+}
+
+/**
+ * The events found by auditEventIds, read by primary key in id order, which keeps MariaDB's page
+ * reads close together however scattered a motor's events are.
+ */
+export async function writeAuditExtractSheet(ctx: SheetContext, ids: number[]): Promise<void> {
   const sheet = new RollingSheet(ctx.workbook, 'Audit extract', [
     { header: 'Event', format: 'integer' }, { header: 'Time (UTC)', width: 20, format: 'dateTime' },
     { header: 'Actor', width: 20 }, { header: 'Role' }, { header: 'Action', width: 26 }, { header: 'Entity type', width: 14 },
     { header: 'Entity', width: 20 }, { header: 'Reason', width: 30 }, { header: 'Before', width: 40 }, { header: 'After', width: 40 },
     { header: 'Hash', width: 66 },
   ], ctx.rowCap, { tab: tabs.auditExtract });
-  const ids = await eventIds(ctx.db, await referenceEntities(ctx));
-  const serials = await ctx.serials();
-  await eachPageReadAhead(Math.ceil(serials.length / serialPage),
-    (page) => eventIds(ctx.db, [['motor', serials.slice(page * serialPage, (page + 1) * serialPage)]]),
-    async (found) => { for (const id of found) ids.push(id); });
-  ids.sort((a, b) => a - b);
   await eachPageReadAhead(Math.ceil(ids.length / eventPage), (page) => eventsById(ctx.db, ids.slice(page * eventPage, (page + 1) * eventPage)), async (rows) => {
     for (const r of rows) {
       sheet.addRow([Number(r.id), new Date(r.occurred_at), r.actor, r.actor_role, r.action, r.entity_type, r.entity_id,
