@@ -208,4 +208,27 @@ describe('evidence pack contents', () => {
       rmSync(dir, { recursive: true, force: true });
     }
   }, 60_000);
+
+  it('when LibreOffice converts every sheet, then each one reads back with the values exceljs sees', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'fluxtrail-lo-'));
+    try {
+      const xlsx = join(dir, 'pack.xlsx');
+      writeFileSync(xlsx, files.get(`fluxtrail-pack-${status.id}-workbook.xlsx`)!);
+      // Token 12 = -1: one CSV per sheet, named pack-<sheet>.csv (LibreOffice 7.2 and later).
+      execFileSync('/usr/bin/libreoffice', ['--headless', `-env:UserInstallation=file://${join(dir, 'profile')}`,
+        '--convert-to', 'csv:Text - txt - csv (StarCalc):44,34,76,1,,0,false,true,false,false,false,-1', '--outdir', dir, xlsx], { timeout: 60_000, stdio: 'pipe' });
+      const sheetFile = (name: string) => parseCsv(readFileSync(join(dir, `pack-${name}.csv`), 'utf8'));
+      for (const sheet of workbook.worksheets) {
+        const fromLibreOffice = sheetFile(sheet.name);
+        expect(fromLibreOffice[0], sheet.name).toEqual((sheet.getRow(1).values as ExcelJS.CellValue[]).slice(1).map(String));
+        expect(fromLibreOffice.length, sheet.name).toBe(sheet.rowCount);
+      }
+      const results = sheetFile('Results PM-150');
+      const first = workbook.getWorksheet('Results PM-150')!.getRow(2);
+      expect(results[1].slice(0, 3)).toEqual([first.getCell(1).value, first.getCell(2).value, String(first.getCell(3).value)]);
+      expect(workbook.worksheets.filter((w) => w.name.startsWith('Audit extract')).flatMap((w) => sheetFile(w.name).map((r) => r[7]))).toContain('=cmd|calc');
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  }, 90_000);
 });
