@@ -3,7 +3,7 @@ import { randomBytes } from 'node:crypto';
 import { join } from 'node:path';
 import type { Knex } from 'knex';
 import type { PackFilter } from './pack-filter.js';
-import { countPack } from './pack-scope.js';
+import { countPack, packProducts } from './pack-scope.js';
 import { writePackContents } from './write-pack-contents.js';
 import { buildManifest, manifestName, type PackedFile } from './pack-manifest.js';
 import { ZipFile } from './zip-file.js';
@@ -41,18 +41,22 @@ export async function buildEvidencePack(db: Knex, filter: PackFilter, origin: Pa
   const zipPath = join(work, 'pack.zip');
   const pack = new ZipFile(zipPath, csvDeflateLevel);
   try {
-    const totals = await countPack(db, filter);
-    const rowsTotal = totals.measurements + totals.motors + totals.runs;
+    // Counting takes a while on a large pack; the Results pass starts meanwhile and progress is
+    // reported once there is a total to report against.
+    const counting = countPack(db, filter);
+    counting.catch(() => undefined); // awaited below; this only keeps an early failure from counting as unhandled
+    let rowsTotal: number | undefined;
+    counting.then((t) => { rowsTotal = t.measurements + t.motors + t.runs; }, () => undefined);
     let rowsDone = 0;
     const advance = async (rows: number) => {
       rowsDone += rows;
-      await options.onProgress(rowsDone, rowsTotal);
+      if (rowsTotal !== undefined) await options.onProgress(rowsDone, rowsTotal);
     };
     const csvName = `fluxtrail-pack-${origin.packId}-measurements.csv`;
     const xlsxName = `fluxtrail-pack-${origin.packId}-workbook.xlsx`;
     const xlsxPath = join(work, xlsxName);
     const written = await writePackContents({
-      db, filter, totals, origin, rowCap: options.sheetRowCap ?? sheetRowLimit, advance,
+      db, filter, products: await packProducts(db, filter), totals: counting, origin, rowCap: options.sheetRowCap ?? sheetRowLimit, advance,
       workbookPath: xlsxPath, csv: { name: csvName, entry: pack.openEntry(csvName) },
     });
     const files: PackedFile[] = [
@@ -60,7 +64,7 @@ export async function buildEvidencePack(db: Knex, filter: PackFilter, origin: Pa
       { name: csvName, bytes: written.csv.bytes, sha256: written.csv.sha256 },
     ];
     pack.addFile(xlsxPath, xlsxName, { store: true });
-    pack.addText(manifestName, `${JSON.stringify(buildManifest(origin, filter, totals, written.csv.rows, files), null, 2)}\n`);
+    pack.addText(manifestName, `${JSON.stringify(buildManifest(origin, filter, await counting, written.csv.rows, files), null, 2)}\n`);
     const zip = await pack.finish();
     const fileKey = `${packsFolder}/evidence-pack-${origin.packId}-${randomBytes(6).toString('hex')}.zip`;
     await rename(zipPath, join(options.dataDir, fileKey));

@@ -1,10 +1,10 @@
 import type { Knex } from 'knex';
 import type { PackFilter } from './pack-filter.js';
-import { packSerials, type PackTotals } from './pack-scope.js';
+import { packSerials, type PackProduct, type PackTotals } from './pack-scope.js';
 import { PackCsv, type CharacteristicFacts, type WrittenCsv } from './pack-csv.js';
 import type { WrittenFile, ZipEntry } from './zip-file.js';
 import { XlsxPackage } from './xlsx/xlsx-package.js';
-import type { PackOrigin, SheetContext } from './workbook/pack-context.js';
+import type { PackOrigin, PassContext, SheetContext } from './workbook/pack-context.js';
 import { writeSummarySheet } from './workbook/summary-sheet.js';
 import { writeMotorsSheet } from './workbook/motors-sheet.js';
 import { writeResultsSheets } from './workbook/results-sheets.js';
@@ -15,7 +15,9 @@ import { auditEventIds, writeAuditExtractSheet } from './workbook/audit-extract-
 export type ContentsInput = {
   db: Knex;
   filter: PackFilter;
-  totals: PackTotals;
+  /** The pack's products, needed at once; the counts may still be coming. */
+  products: PackProduct[];
+  totals: Promise<PackTotals>;
   origin: PackOrigin;
   rowCap: number;
   advance: (rows: number) => Promise<void>;
@@ -38,14 +40,15 @@ export async function writePackContents(input: ContentsInput): Promise<{ csv: Wr
   const workbook = new XlsxPackage(input.workbookPath, { creator: `Fluxtrail ${input.origin.version}`, created: input.origin.requestedAt });
   try {
     let serials: Promise<string[]> | undefined;
-    const ctx: SheetContext = { ...input, workbook, serials: () => (serials ??= packSerials(input.db, input.filter)) };
+    const pass: PassContext = { ...input, workbook, serials: () => (serials ??= packSerials(input.db, input.filter)) };
     // Finding the audit events is index work for MariaDB alone: it runs beside the Results pass.
-    const auditIds = auditEventIds(ctx);
+    const auditIds = auditEventIds(pass, input.totals);
     auditIds.catch(() => undefined); // awaited below; this only keeps an early failure from counting as unhandled
     try {
       const csv = new PackCsv(input.csv.entry, await characteristicFacts(input.db));
-      await writeResultsSheets(ctx, csv);
+      await writeResultsSheets(pass, csv, input.products);
       const csvFile = csv.finish();
+      const ctx: SheetContext = { ...pass, totals: await input.totals };
       await writeMotorsSheet(ctx);
       await writeLimitsSheet(ctx);
       await writeStationsSheet(ctx);

@@ -1,8 +1,8 @@
 import type { Knex } from 'knex';
-import { packMotors } from '../pack-scope.js';
+import { packMotors, type PackTotals } from '../pack-scope.js';
 import { eachPageReadAhead } from '../read-ahead.js';
 import { RollingSheet } from './rolling-sheet.js';
-import { fitCell, tabs, type SheetContext } from './pack-context.js';
+import { fitCell, tabs, type PassContext, type SheetContext } from './pack-context.js';
 
 type EventRow = {
   id: number; occurred_at: Date; actor: string; actor_role: string | null; action: string; entity_type: string;
@@ -16,8 +16,8 @@ const serialPage = 200;
 const eventPage = 500;
 
 /** The records the pack rests on, named the way the audit trail names them (codes, not row ids). */
-async function referenceEntities(ctx: SheetContext): Promise<Array<[string, string[]]>> {
-  const { db, filter, totals } = ctx;
+async function referenceEntities(ctx: PassContext, totals: PackTotals): Promise<Array<[string, string[]]>> {
+  const { db, filter } = ctx;
   const pluck = async (q: Knex.QueryBuilder, column: string) => ((await q) as Array<Record<string, unknown>>).map((r) => String(r[column]));
   const lots = await pluck(packMotors(db, filter).distinct('l.code'), 'code');
   const products = totals.products.map((p) => p.code);
@@ -48,14 +48,16 @@ function eventsById(db: Knex, ids: number[]): Promise<EventRow[]> {
 /**
  * The ids of every audit event about the pack's motors, lots, products, stations, limit revisions
  * and characteristics, oldest first, from the entity index alone. Index-only work for MariaDB, so
- * it can run beside the writing of other sheets.
+ * it can run beside the writing of other sheets; the motors' events are looked up first, as the
+ * other records are known only once the pack is counted.
  */
-export async function auditEventIds(ctx: SheetContext): Promise<number[]> {
-  const ids = await eventIds(ctx.db, await referenceEntities(ctx));
+export async function auditEventIds(ctx: PassContext, totals: Promise<PackTotals>): Promise<number[]> {
+  const ids: number[] = [];
   const serials = await ctx.serials();
   await eachPageReadAhead(Math.ceil(serials.length / serialPage),
     (page) => eventIds(ctx.db, [['motor', serials.slice(page * serialPage, (page + 1) * serialPage)]]),
     async (found) => { for (const id of found) ids.push(id); });
+  for (const id of await eventIds(ctx.db, await referenceEntities(ctx, await totals))) ids.push(id);
   return ids.sort((a, b) => a - b);
 }
 

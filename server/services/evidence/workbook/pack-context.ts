@@ -19,6 +19,9 @@ export type SheetContext = {
   serials: () => Promise<string[]>;
 };
 
+/** What the Results pass needs: it starts before the pack's counts are in. */
+export type PassContext = Omit<SheetContext, 'totals'>;
+
 /** Where each sheet stands among the tabs. They are written in another order: Results first (in
  * one pass with the CSV), Summary last (it carries the CSV's hash). */
 export const tabs = { summary: 1, motors: 2, results: 3, limits: 4, stations: 5, holds: 6, signals: 7, auditExtract: 8 } as const;

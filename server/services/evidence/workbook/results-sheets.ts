@@ -1,7 +1,8 @@
 import { eachRunPage, type PackRun } from '../read-pack-runs.js';
 import type { PackCsv } from '../pack-csv.js';
 import { RollingSheet, type CellValue, type ColumnSpec } from './rolling-sheet.js';
-import { tabs, type SheetContext } from './pack-context.js';
+import { tabs, type PassContext } from './pack-context.js';
+import type { PackProduct } from '../pack-scope.js';
 
 type Characteristic = { id: number; code: string; unit: string };
 
@@ -34,8 +35,8 @@ function resultsRow(run: PackRun, column: ReadonlyMap<number, number>, character
  * per characteristic. The same read of the runs writes the CSV, so the database is read once;
  * the CSV's lines therefore come product by product (in code order), each product's runs by id.
  */
-export async function writeResultsSheets(ctx: SheetContext, csv: PackCsv): Promise<void> {
-  for (const product of ctx.totals.products) {
+export async function writeResultsSheets(ctx: PassContext, csv: PackCsv, products: readonly PackProduct[]): Promise<void> {
+  for (const product of products) {
     const characteristics = (await ctx.db('characteristics').where({ product_id: product.id })
       .orderBy([{ column: 'sort_order' }, { column: 'id' }]).select('id', 'code', 'unit')) as Characteristic[];
     const column = new Map(characteristics.map((c, index) => [Number(c.id), index]));
