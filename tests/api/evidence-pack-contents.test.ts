@@ -8,8 +8,11 @@ import { join } from 'node:path';
 import type { RunningServer } from '../../server/index.js';
 import { claimNextExportJob, runExportJob } from '../../server/jobs/export-jobs.js';
 import { startApiServer } from '../support/api-server.js';
-import { injectionBadges, seedPlant, signedIn, type Agent, type Seeded } from './evidence-seed.js';
+import { controlCharacterReason, injectionBadges, seedPlant, signedIn, type Agent, type Seeded } from './evidence-seed.js';
 import { parseCsv, sha256, unzip } from './evidence-zip.js';
+
+// The stored reason as a worksheet holds it: ECMA-376's _xHHHH_ for what XML 1.0 cannot carry.
+const reasonInWorkbook = 'Retested quietly_x0007_ (bell)_x000D_\nsee _x005F_x0041_ in the log_xFFFF_';
 
 type DbRun = { id: number; run_uuid: string; serial: string; product: string; attempt: number; started_at: Date; station: string; operator_badge: string; revision: number; verdict: string };
 
@@ -151,6 +154,15 @@ describe('evidence pack contents', () => {
     }
   });
 
+  it('when the workbook\'s parts are listed, then Summary is the first tab yet its sheet is the last one in the zip, and no cell holds a formula', async () => {
+    const parts = await unzip(files.get(`fluxtrail-pack-${status.id}-workbook.xlsx`)!);
+    const sheetParts = [...parts.keys()].filter((name) => name.startsWith('xl/worksheets/sheet'));
+    expect(sheetParts).toHaveLength(workbook.worksheets.length);
+    expect(sheetParts.at(-1)).toBe('xl/worksheets/sheet1.xml');
+    expect(parts.get('xl/workbook.xml')!.toString('utf8')).toMatch(/<sheets><sheet sheetId="1" name="Summary"/);
+    for (const name of sheetParts) expect(parts.get(name)!.toString('utf8'), name).not.toMatch(/<f[ >]/);
+  });
+
   it('when the sheets are inspected, then headers are frozen and carry an autofilter', () => {
     for (const sheet of workbook.worksheets) {
       expect(sheet.views[0], sheet.name).toMatchObject({ state: 'frozen', ySplit: 1 });
@@ -172,6 +184,8 @@ describe('evidence pack contents', () => {
     expect(stations.map((s) => [s[0], s[7]])).toEqual([['EOL-1', 'CAL-EOL-1-1'], ['EOL-1', 'CAL-EOL-1-2'], ['EOL-2', 'CAL-EOL-2-1'], ['EOL-2', 'CAL-EOL-2-2']]);
     const holds = values('Holds');
     expect(holds.map((h) => [h[1], h[2], h[4]])).toEqual([['motor', 'PM150-0003', 'Noise at run-up; listen again']]);
+    expect(controlCharacterReason).toContain('\u0007');
+    expect(holds[0][9]).toBe(reasonInWorkbook);
     const audit = values('Audit extract');
     const expectedEvents = await server.db('audit_events')
       .where((q) => q.where({ entity_type: 'motor', entity_id: 'PM150-0003' }).orWhere({ entity_type: 'motor', entity_id: 'DC40-0002' })
@@ -227,6 +241,7 @@ describe('evidence pack contents', () => {
       const first = workbook.getWorksheet('Results PM-150')!.getRow(2);
       expect(results[1].slice(0, 3)).toEqual([first.getCell(1).value, first.getCell(2).value, String(first.getCell(3).value)]);
       expect(workbook.worksheets.filter((w) => w.name.startsWith('Audit extract')).flatMap((w) => sheetFile(w.name).map((r) => r[7]))).toContain('=cmd|calc');
+      expect(sheetFile('Holds')[1][9]).toBe(reasonInWorkbook);
     } finally {
       rmSync(dir, { recursive: true, force: true });
     }

@@ -9,6 +9,7 @@ import { buildManifest, manifestName, type PackedFile } from './pack-manifest.js
 import { ZipFile } from './zip-file.js';
 import { sheetRowLimit } from './workbook/rolling-sheet.js';
 import type { PackOrigin } from './workbook/pack-context.js';
+import type { SheetShape } from './workbook/pack-workbook.js';
 
 export const packsFolder = 'evidence-packs';
 
@@ -25,7 +26,11 @@ export type BuildOptions = {
   onProgress: (rowsDone: number, rowsTotal: number) => Promise<void>;
 };
 
-export type BuiltPack = { fileKey: string; sizeBytes: number; sha256: string; rows: number };
+export type BuiltPack = {
+  fileKey: string; sizeBytes: number; sha256: string; rows: number;
+  /** Lines of the CSV (without header) and what each worksheet held, in tab order. */
+  csvRows: number; sheets: SheetShape[];
+};
 
 /**
  * Builds one evidence pack: a zip of the workbook, the long CSV and a manifest hashing both.
@@ -68,7 +73,7 @@ export async function buildEvidencePack(db: Knex, filter: PackFilter, origin: Pa
     const zip = await pack.finish();
     const fileKey = `${packsFolder}/evidence-pack-${origin.packId}-${randomBytes(6).toString('hex')}.zip`;
     await rename(zipPath, join(options.dataDir, fileKey));
-    return { fileKey, sizeBytes: zip.bytes, sha256: zip.sha256, rows: rowsDone };
+    return { fileKey, sizeBytes: zip.bytes, sha256: zip.sha256, rows: rowsDone, csvRows: written.csv.rows, sheets: written.sheets };
   } catch (error) {
     await pack.abort();
     throw error;

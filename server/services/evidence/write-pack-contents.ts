@@ -3,9 +3,9 @@ import type { PackFilter } from './pack-filter.js';
 import { packSerials, type PackProduct, type PackTotals } from './pack-scope.js';
 import { PackCsv, type CharacteristicFacts, type WrittenCsv } from './pack-csv.js';
 import type { WrittenFile, ZipEntry } from './zip-file.js';
-import { XlsxPackage } from './xlsx/xlsx-package.js';
+import { PackWorkbook, type SheetShape } from './workbook/pack-workbook.js';
 import type { PackOrigin, PassContext, SheetContext } from './workbook/pack-context.js';
-import { writeSummarySheet } from './workbook/summary-sheet.js';
+import { openSummarySheet } from './workbook/summary-sheet.js';
 import { writeMotorsSheet } from './workbook/motors-sheet.js';
 import { writeResultsSheets } from './workbook/results-sheets.js';
 import { writeLimitsSheet, writeStationsSheet } from './workbook/reference-sheets.js';
@@ -32,31 +32,32 @@ async function characteristicFacts(db: Knex): Promise<Map<number, Characteristic
 
 /**
  * The workbook (to a file) and the CSV (into its zip entry) from one read of the database: the
- * Results sheets and the CSV are written from the same pages of runs. Each sheet is finished
- * before the next begins, so memory stays flat; Summary is written last, as it carries the
- * CSV's hash, yet stays the first tab.
+ * Results sheets and the CSV are written from the same pages of runs. Sheets are written in tab
+ * order, each finished before the next begins, so memory stays flat; Summary, the first tab, is
+ * written last, as it carries the CSV's hash.
  */
-export async function writePackContents(input: ContentsInput): Promise<{ csv: WrittenCsv; workbook: WrittenFile }> {
-  const workbook = new XlsxPackage(input.workbookPath, { creator: `Fluxtrail ${input.origin.version}`, created: input.origin.requestedAt });
+export async function writePackContents(input: ContentsInput): Promise<{ csv: WrittenCsv; workbook: WrittenFile; sheets: SheetShape[] }> {
+  const workbook = new PackWorkbook(input.workbookPath, { creator: `Fluxtrail ${input.origin.version}`, created: input.origin.requestedAt });
   try {
+    const writeSummary = openSummarySheet(workbook);
     let serials: Promise<string[]> | undefined;
     const pass: PassContext = { ...input, workbook, serials: () => (serials ??= packSerials(input.db, input.filter)) };
-    // Finding the audit events is index work for MariaDB alone: it runs beside the Results pass.
+    // Finding the audit events is index work for MariaDB alone: it runs beside the Motors and Results sheets.
     const auditIds = auditEventIds(pass, input.totals);
     auditIds.catch(() => undefined); // awaited below; this only keeps an early failure from counting as unhandled
     try {
+      await writeMotorsSheet(pass);
       const csv = new PackCsv(input.csv.entry, await characteristicFacts(input.db));
       await writeResultsSheets(pass, csv, input.products);
       const csvFile = csv.finish();
       const ctx: SheetContext = { ...pass, totals: await input.totals };
-      await writeMotorsSheet(ctx);
       await writeLimitsSheet(ctx);
       await writeStationsSheet(ctx);
       await writeHoldsSheet(ctx);
       await writeSignalsSheet(ctx);
       await writeAuditExtractSheet(ctx, await auditIds);
-      await writeSummarySheet(ctx, { name: input.csv.name, sha256: csvFile.sha256, rows: csvFile.rows });
-      return { csv: csvFile, workbook: await workbook.finish() };
+      await writeSummary(ctx, { name: input.csv.name, sha256: csvFile.sha256, rows: csvFile.rows });
+      return { csv: csvFile, workbook: await workbook.finish(), sheets: workbook.shapes };
     } finally {
       await auditIds.catch(() => undefined);
     }

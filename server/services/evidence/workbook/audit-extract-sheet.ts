@@ -1,8 +1,8 @@
 import type { Knex } from 'knex';
 import { packMotors, type PackTotals } from '../pack-scope.js';
 import { eachPageReadAhead } from '../read-ahead.js';
-import { RollingSheet } from './rolling-sheet.js';
-import { fitCell, tabs, type PassContext, type SheetContext } from './pack-context.js';
+import { RollingSheet, formats } from './rolling-sheet.js';
+import { fitCell, type PassContext, type SheetContext } from './pack-context.js';
 
 type EventRow = {
   id: number; occurred_at: Date; actor: string; actor_role: string | null; action: string; entity_type: string;
@@ -67,11 +67,11 @@ export async function auditEventIds(ctx: PassContext, totals: Promise<PackTotals
  */
 export async function writeAuditExtractSheet(ctx: SheetContext, ids: number[]): Promise<void> {
   const sheet = new RollingSheet(ctx.workbook, 'Audit extract', [
-    { header: 'Event', format: 'integer' }, { header: 'Time (UTC)', width: 20, format: 'dateTime' },
+    { header: 'Event', numFmt: formats.integer }, { header: 'Time (UTC)', width: 20, numFmt: formats.dateTime },
     { header: 'Actor', width: 20 }, { header: 'Role' }, { header: 'Action', width: 26 }, { header: 'Entity type', width: 14 },
     { header: 'Entity', width: 20 }, { header: 'Reason', width: 30 }, { header: 'Before', width: 40 }, { header: 'After', width: 40 },
     { header: 'Hash', width: 66 },
-  ], ctx.rowCap, { tab: tabs.auditExtract });
+  ], ctx.rowCap);
   await eachPageReadAhead(Math.ceil(ids.length / eventPage), (page) => eventsById(ctx.db, ids.slice(page * eventPage, (page + 1) * eventPage)), async (rows) => {
     for (const r of rows) {
       sheet.addRow([Number(r.id), new Date(r.occurred_at), r.actor, r.actor_role, r.action, r.entity_type, r.entity_id,

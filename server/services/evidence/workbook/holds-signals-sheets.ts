@@ -1,6 +1,6 @@
 import { packMotors } from '../pack-scope.js';
-import { RollingSheet, type CellValue } from './rolling-sheet.js';
-import { fitCell, tabs, type SheetContext } from './pack-context.js';
+import { RollingSheet, formats, type CellValue } from './rolling-sheet.js';
+import { fitCell, type SheetContext } from './pack-context.js';
 
 type HoldRow = {
   id: number; serial: string | null; lot: string | null; kind: string; reason: string; placed_by: string;
@@ -19,11 +19,11 @@ export async function writeHoldsSheet(ctx: SheetContext): Promise<void> {
     .select('h.id', { serial: 'hm.serial' }, { lot: 'hl.code' }, 'h.kind', 'h.reason', 'h.placed_by', 'h.placed_at',
       'h.released_by', 'h.released_at', 'h.release_reason')) as HoldRow[];
   const sheet = new RollingSheet(ctx.workbook, 'Holds', [
-    { header: 'Hold', format: 'integer' }, { header: 'On', width: 8 }, { header: 'Serial or lot', width: 20 },
+    { header: 'Hold', numFmt: formats.integer }, { header: 'On', width: 8 }, { header: 'Serial or lot', width: 20 },
     { header: 'Kind' }, { header: 'Reason', width: 40 }, { header: 'Placed by', width: 20 },
-    { header: 'Placed at (UTC)', width: 20, format: 'dateTime' }, { header: 'Released by', width: 20 },
-    { header: 'Released at (UTC)', width: 20, format: 'dateTime' }, { header: 'Release reason', width: 40 },
-  ], ctx.rowCap, { tab: tabs.holds });
+    { header: 'Placed at (UTC)', width: 20, numFmt: formats.dateTime }, { header: 'Released by', width: 20 },
+    { header: 'Released at (UTC)', width: 20, numFmt: formats.dateTime }, { header: 'Release reason', width: 40 },
+  ], ctx.rowCap);
   for (const r of rows) {
     sheet.addRow([Number(r.id), r.serial ? 'motor' : 'lot', r.serial ?? r.lot, r.kind, r.reason, r.placed_by,
       new Date(r.placed_at), r.released_by, r.released_at ? new Date(r.released_at) : null, r.release_reason]);
@@ -51,8 +51,8 @@ export async function writeSignalsSheet(ctx: SheetContext): Promise<void> {
   const lotIds = packMotors(ctx.db, ctx.filter).distinct('m.lot_id');
   const rows = (await ctx.db('signals').whereIn('lot_id', lotIds).orderBy('id').select(columns)) as Array<Record<string, unknown>>;
   const sheet = new RollingSheet(ctx.workbook, 'Signals', columns.map((name) => ({
-    header: name, format: /_at$/.test(name) ? 'dateTime' : undefined, width: /_at$/.test(name) ? 20 : undefined,
-  })), ctx.rowCap, { tab: tabs.signals });
+    header: name, numFmt: /_at$/.test(name) ? formats.dateTime : undefined, width: /_at$/.test(name) ? 20 : undefined,
+  })), ctx.rowCap);
   for (const row of rows) sheet.addRow(columns.map((name) => asCell(row[name])));
   sheet.commit();
   await ctx.advance(0);

@@ -1,8 +1,8 @@
 import type { Knex } from 'knex';
 import { packMotors } from '../pack-scope.js';
 import { eachPageReadAhead } from '../read-ahead.js';
-import { RollingSheet } from './rolling-sheet.js';
-import { tabs, type SheetContext } from './pack-context.js';
+import { RollingSheet, formats } from './rolling-sheet.js';
+import type { PassContext } from './pack-context.js';
 
 type MotorRow = {
   id: number; serial: string; product: string; lot: string; lot_id: number; status: string; attempts: number;
@@ -14,7 +14,7 @@ type MotorRow = {
 const pageSize = 500;
 
 /** The pack's motors and lots that carry a hold not yet released (few: read once). */
-async function activeHolds(ctx: SheetContext): Promise<{ motors: Set<number>; lots: Set<number> }> {
+async function activeHolds(ctx: PassContext): Promise<{ motors: Set<number>; lots: Set<number> }> {
   const rows = (await ctx.db('holds').whereNull('released_at')
     .where((q) => q.whereIn('motor_id', packMotors(ctx.db, ctx.filter).select('m.id'))
       .orWhereIn('lot_id', packMotors(ctx.db, ctx.filter).distinct('m.lot_id')))
@@ -35,15 +35,15 @@ function readMotors(db: Knex, serials: string[]): Promise<MotorRow[]> {
 }
 
 /** One row per motor, in serial order, paged on the serial (unique); the next page is read while this one is written. */
-export async function writeMotorsSheet(ctx: SheetContext): Promise<void> {
-  const sheet = new RollingSheet(ctx.workbook, 'Motors', [
-    { header: 'Serial', width: 20 }, { header: 'Product', width: 12 }, { header: 'Lot', width: 16 },
-    { header: 'Status', width: 12 }, { header: 'On hold', width: 9 }, { header: 'Attempts', format: 'integer' },
-    { header: 'Last station', width: 14 }, { header: 'Last tested (UTC)', width: 20, format: 'dateTime' },
-    { header: 'Created (UTC)', width: 20, format: 'dateTime' },
-  ], ctx.rowCap, { tab: tabs.motors });
+export async function writeMotorsSheet(ctx: PassContext): Promise<void> {
   const serials = await ctx.serials();
   const holds = await activeHolds(ctx);
+  const sheet = new RollingSheet(ctx.workbook, 'Motors', [
+    { header: 'Serial', width: 20 }, { header: 'Product', width: 12 }, { header: 'Lot', width: 16 },
+    { header: 'Status', width: 12 }, { header: 'On hold', width: 9 }, { header: 'Attempts', numFmt: formats.integer },
+    { header: 'Last station', width: 14 }, { header: 'Last tested (UTC)', width: 20, numFmt: formats.dateTime },
+    { header: 'Created (UTC)', width: 20, numFmt: formats.dateTime },
+  ], ctx.rowCap);
   await eachPageReadAhead(Math.ceil(serials.length / pageSize), (page) => readMotors(ctx.db, serials.slice(page * pageSize, (page + 1) * pageSize)), async (rows) => {
     for (const r of rows) {
       const onHold = r.status === 'on hold' || holds.motors.has(Number(r.id)) || holds.lots.has(Number(r.lot_id));

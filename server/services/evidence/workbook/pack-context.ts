@@ -1,7 +1,7 @@
 import type { Knex } from 'knex';
 import type { PackFilter } from '../pack-filter.js';
 import type { PackTotals } from '../pack-scope.js';
-import type { XlsxPackage } from '../xlsx/xlsx-package.js';
+import type { PackWorkbook } from './pack-workbook.js';
 
 /** Who asked for the pack and when: printed on the Summary sheet and in the manifest. */
 export type PackOrigin = { packId: number; requestedBy: string; requestedRole: string; requestedAt: Date; version: string };
@@ -9,7 +9,7 @@ export type PackOrigin = { packId: number; requestedBy: string; requestedRole: s
 /** Everything a sheet writer needs; `advance` reports rows written and throws when the job is cancelled. */
 export type SheetContext = {
   db: Knex;
-  workbook: XlsxPackage;
+  workbook: PackWorkbook;
   filter: PackFilter;
   totals: PackTotals;
   origin: PackOrigin;
@@ -21,10 +21,6 @@ export type SheetContext = {
 
 /** What the Results pass needs: it starts before the pack's counts are in. */
 export type PassContext = Omit<SheetContext, 'totals'>;
-
-/** Where each sheet stands among the tabs. They are written in another order: Results first (in
- * one pass with the CSV), Summary last (it carries the CSV's hash). */
-export const tabs = { summary: 1, motors: 2, results: 3, limits: 4, stations: 5, holds: 6, signals: 7, auditExtract: 8 } as const;
 
 /** Excel refuses cells longer than this; longer text is cut with a visible marker. */
 const cellTextMax = 32_767;

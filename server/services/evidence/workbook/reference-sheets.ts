@@ -1,5 +1,5 @@
-import { RollingSheet } from './rolling-sheet.js';
-import { tabs, type SheetContext } from './pack-context.js';
+import { RollingSheet, formats } from './rolling-sheet.js';
+import type { SheetContext } from './pack-context.js';
 
 type LimitRow = {
   product: string; revision: number; status: string; effective_from: Date | null; authored_by_name: string;
@@ -20,13 +20,13 @@ export async function writeLimitsSheet(ctx: SheetContext): Promise<void> {
     .select({ product: 'p.code' }, 'ls.revision', 'ls.status', 'ls.effective_from', 'ls.authored_by_name', 'ls.authored_at',
       'ls.approved_by_name', 'ls.approved_at', { characteristic: 'c.code' }, 'c.unit', 'li.lsl', 'li.nominal', 'li.usl')) as LimitRow[];
   const sheet = new RollingSheet(ctx.workbook, 'Limits', [
-    { header: 'Product', width: 12 }, { header: 'Revision', format: 'integer' }, { header: 'Status' },
-    { header: 'Effective from (UTC)', width: 20, format: 'dateTime' }, { header: 'Authored by', width: 20 },
-    { header: 'Authored at (UTC)', width: 20, format: 'dateTime' }, { header: 'Approved by', width: 20 },
-    { header: 'Approved at (UTC)', width: 20, format: 'dateTime' }, { header: 'Characteristic', width: 22 },
-    { header: 'Unit' }, { header: 'LSL', format: 'measured' }, { header: 'Nominal', format: 'measured' },
-    { header: 'USL', format: 'measured' },
-  ], ctx.rowCap, { tab: tabs.limits });
+    { header: 'Product', width: 12 }, { header: 'Revision', numFmt: formats.integer }, { header: 'Status' },
+    { header: 'Effective from (UTC)', width: 20, numFmt: formats.dateTime }, { header: 'Authored by', width: 20 },
+    { header: 'Authored at (UTC)', width: 20, numFmt: formats.dateTime }, { header: 'Approved by', width: 20 },
+    { header: 'Approved at (UTC)', width: 20, numFmt: formats.dateTime }, { header: 'Characteristic', width: 22 },
+    { header: 'Unit' }, { header: 'LSL', numFmt: formats.measured }, { header: 'Nominal', numFmt: formats.measured },
+    { header: 'USL', numFmt: formats.measured },
+  ], ctx.rowCap);
   for (const r of rows) {
     sheet.addRow([r.product, Number(r.revision), r.status, date(r.effective_from), r.authored_by_name, date(r.authored_at),
       r.approved_by_name, date(r.approved_at), r.characteristic, r.unit, r.lsl, r.nominal, r.usl]);
@@ -50,10 +50,10 @@ export async function writeStationsSheet(ctx: SheetContext): Promise<void> {
       'sc.recorded_by', 'sc.recorded_at')) as StationRow[];
   const sheet = new RollingSheet(ctx.workbook, 'Stations', [
     { header: 'Station', width: 12 }, { header: 'Line' }, { header: 'Kind', width: 14 }, { header: 'Name', width: 24 },
-    { header: 'Calibration due now', width: 18, format: 'date' }, { header: 'Calibrated on', width: 14, format: 'date' },
-    { header: 'Due after that', width: 14, format: 'date' }, { header: 'Certificate', width: 18 },
-    { header: 'Recorded by', width: 20 }, { header: 'Recorded at (UTC)', width: 20, format: 'dateTime' },
-  ], ctx.rowCap, { tab: tabs.stations });
+    { header: 'Calibration due now', width: 18, numFmt: formats.date }, { header: 'Calibrated on', width: 14, numFmt: formats.date },
+    { header: 'Due after that', width: 14, numFmt: formats.date }, { header: 'Certificate', width: 18 },
+    { header: 'Recorded by', width: 20 }, { header: 'Recorded at (UTC)', width: 20, numFmt: formats.dateTime },
+  ], ctx.rowCap);
   for (const r of rows) {
     sheet.addRow([r.code, r.line, r.kind, r.name, new Date(r.calibration_due), date(r.calibrated_on), date(r.due),
       r.certificate, r.recorded_by, date(r.recorded_at)]);

@@ -1,16 +1,16 @@
 import { eachRunPage, type PackRun } from '../read-pack-runs.js';
 import type { PackCsv } from '../pack-csv.js';
-import { RollingSheet, type CellValue, type ColumnSpec } from './rolling-sheet.js';
-import { tabs, type PassContext } from './pack-context.js';
+import { RollingSheet, formats, type CellValue, type ColumnSpec } from './rolling-sheet.js';
+import type { PassContext } from './pack-context.js';
 import type { PackProduct } from '../pack-scope.js';
 
 type Characteristic = { id: number; code: string; unit: string };
 
 const runColumns: ColumnSpec[] = [
-  { header: 'Serial', width: 20 }, { header: 'Run', width: 38 }, { header: 'Attempt', format: 'integer' },
-  { header: 'Started (UTC)', width: 20, format: 'dateTime' }, { header: 'Station', width: 12 },
-  { header: 'Calibration due', width: 16, format: 'date' }, { header: 'Operator badge', width: 16 },
-  { header: 'Program version', width: 16 }, { header: 'Limit revision', format: 'integer' },
+  { header: 'Serial', width: 20 }, { header: 'Run', width: 38 }, { header: 'Attempt', numFmt: formats.integer },
+  { header: 'Started (UTC)', width: 20, numFmt: formats.dateTime }, { header: 'Station', width: 12 },
+  { header: 'Calibration due', width: 16, numFmt: formats.date }, { header: 'Operator badge', width: 16 },
+  { header: 'Program version', width: 16 }, { header: 'Limit revision', numFmt: formats.integer },
   { header: 'Verdict', width: 9 },
 ];
 
@@ -43,10 +43,10 @@ export async function writeResultsSheets(ctx: PassContext, csv: PackCsv, product
     const sheet = new RollingSheet(ctx.workbook, `Results ${product.code}`, [
       ...runColumns,
       ...characteristics.flatMap((c): ColumnSpec[] => [
-        { header: `${c.code} [${c.unit}]`, format: 'measured' },
+        { header: `${c.code} [${c.unit}]`, numFmt: formats.measured },
         { header: `${c.code} verdict` },
       ]),
-    ], ctx.rowCap, { tab: tabs.results });
+    ], ctx.rowCap);
     await eachRunPage(ctx.db, ctx.filter, { productId: product.id }, async (runs) => {
       let measurements = 0;
       for (const run of runs) {
