@@ -3,7 +3,7 @@ import { randomBytes } from 'node:crypto';
 import { join } from 'node:path';
 import type { Knex } from 'knex';
 import type { PackFilter } from './pack-filter.js';
-import { countPack, packProducts } from './pack-scope.js';
+import { countPack, packProducts, type PackTotals } from './pack-scope.js';
 import { writePackContents } from './write-pack-contents.js';
 import { buildManifest, manifestName, type PackedFile } from './pack-manifest.js';
 import { ZipFile } from './zip-file.js';
@@ -46,12 +46,17 @@ export async function buildEvidencePack(db: Knex, filter: PackFilter, origin: Pa
   const zipPath = join(work, 'pack.zip');
   const pack = new ZipFile(zipPath, csvDeflateLevel);
   try {
-    // Counting takes a while on a large pack; the Results pass starts meanwhile and progress is
-    // reported once there is a total to report against.
-    const counting = countPack(db, filter);
-    counting.catch(() => undefined); // awaited below; this only keeps an early failure from counting as unhandled
+    // Counting takes a while on a large pack: it runs beside the Results pass (see
+    // writePackContents), and progress is reported once there is a total to report against.
+    let counting: Promise<PackTotals> | undefined;
     let rowsTotal: number | undefined;
-    counting.then((t) => { rowsTotal = t.measurements + t.motors + t.runs; }, () => undefined);
+    const count = () => {
+      if (!counting) {
+        counting = countPack(db, filter);
+        counting.then((t) => { rowsTotal = t.measurements + t.motors + t.runs; }, () => undefined);
+      }
+      return counting;
+    };
     let rowsDone = 0;
     const advance = async (rows: number) => {
       rowsDone += rows;
@@ -61,7 +66,7 @@ export async function buildEvidencePack(db: Knex, filter: PackFilter, origin: Pa
     const xlsxName = `fluxtrail-pack-${origin.packId}-workbook.xlsx`;
     const xlsxPath = join(work, xlsxName);
     const written = await writePackContents({
-      db, filter, products: await packProducts(db, filter), totals: counting, origin, rowCap: options.sheetRowCap ?? sheetRowLimit, advance,
+      db, filter, products: await packProducts(db, filter), count, origin, rowCap: options.sheetRowCap ?? sheetRowLimit, advance,
       workbookPath: xlsxPath, csv: { name: csvName, entry: pack.openEntry(csvName) },
     });
     const files: PackedFile[] = [
@@ -69,7 +74,7 @@ export async function buildEvidencePack(db: Knex, filter: PackFilter, origin: Pa
       { name: csvName, bytes: written.csv.bytes, sha256: written.csv.sha256 },
     ];
     pack.addFile(xlsxPath, xlsxName, { store: true });
-    pack.addText(manifestName, `${JSON.stringify(buildManifest(origin, filter, await counting, written.csv.rows, files), null, 2)}\n`);
+    pack.addText(manifestName, `${JSON.stringify(buildManifest(origin, filter, await count(), written.csv.rows, files), null, 2)}\n`);
     const zip = await pack.finish();
     const fileKey = `${packsFolder}/evidence-pack-${origin.packId}-${randomBytes(6).toString('hex')}.zip`;
     await rename(zipPath, join(options.dataDir, fileKey));

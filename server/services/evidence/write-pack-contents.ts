@@ -15,9 +15,10 @@ import { auditEventIds, writeAuditExtractSheet } from './workbook/audit-extract-
 export type ContentsInput = {
   db: Knex;
   filter: PackFilter;
-  /** The pack's products, needed at once; the counts may still be coming. */
+  /** The pack's products, needed at once. */
   products: PackProduct[];
-  totals: Promise<PackTotals>;
+  /** Starts counting the pack (once) and gives the counts. */
+  count: () => Promise<PackTotals>;
   origin: PackOrigin;
   rowCap: number;
   advance: (rows: number) => Promise<void>;
@@ -42,15 +43,18 @@ export async function writePackContents(input: ContentsInput): Promise<{ csv: Wr
     const writeSummary = openSummarySheet(workbook);
     let serials: Promise<string[]> | undefined;
     const pass: PassContext = { ...input, workbook, serials: () => (serials ??= packSerials(input.db, input.filter)) };
-    // Finding the audit events is index work for MariaDB alone: it runs beside the Motors and Results sheets.
-    const auditIds = auditEventIds(pass, input.totals);
-    auditIds.catch(() => undefined); // awaited below; this only keeps an early failure from counting as unhandled
+    await writeMotorsSheet(pass);
+    // Counting the pack and finding its audit events are work for MariaDB alone: they run beside
+    // the Results pass, which keeps this process busy, rather than slowing the Motors sheet's reads.
+    const totals = input.count();
+    totals.catch(() => undefined); // awaited below; this only keeps an early failure from counting as unhandled
+    const auditIds = auditEventIds(pass, totals);
+    auditIds.catch(() => undefined); // as above
     try {
-      await writeMotorsSheet(pass);
       const csv = new PackCsv(input.csv.entry, await characteristicFacts(input.db));
       await writeResultsSheets(pass, csv, input.products);
       const csvFile = csv.finish();
-      const ctx: SheetContext = { ...pass, totals: await input.totals };
+      const ctx: SheetContext = { ...pass, totals: await totals };
       await writeLimitsSheet(ctx);
       await writeStationsSheet(ctx);
       await writeHoldsSheet(ctx);
@@ -59,7 +63,7 @@ export async function writePackContents(input: ContentsInput): Promise<{ csv: Wr
       await writeSummary(ctx, { name: input.csv.name, sha256: csvFile.sha256, rows: csvFile.rows });
       return { csv: csvFile, workbook: await workbook.finish(), sheets: workbook.shapes };
     } finally {
-      await auditIds.catch(() => undefined);
+      await Promise.allSettled([totals, auditIds]);
     }
   } catch (error) {
     await workbook.abort();
