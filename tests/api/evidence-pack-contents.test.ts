@@ -79,6 +79,7 @@ describe('evidence pack contents', () => {
       counts: { motors: 6, testRuns: runs.length, measurements: Number(measured!.n), csvRows: Number(measured!.n), products: ['DC-40', 'PM-150'] },
     });
     expect(manifest.notes.csvInjection).toMatch(/single quote.*OWASP/);
+    expect(manifest.notes.workbookText).toMatch(/_xHHHH_ \(ECMA-376 ST_Xstring\)/);
   });
 
   it('when the CSV is read, then it has one line per measurement matching the database, with formula-like text quoted', async () => {

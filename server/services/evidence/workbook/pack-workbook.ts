@@ -25,9 +25,9 @@ const backlogBytes = 1 << 20;
 
 /**
  * The pack's workbook, streamed to disk by exceljs's WorkbookWriter (styles on for the number and
- * date formats, strings inline, deflate level 1) and hashed (SHA-256) as its bytes leave, so it is
- * never read back. Tabs stand in the order sheets are created; each sheet is written whole before
- * the next is created, so one sheet at a time is open.
+ * date formats, text in each cell rather than a shared-strings table, deflate level 1) and hashed
+ * (SHA-256) as its bytes leave, so it is never read back. Tabs stand in the order sheets are
+ * created; each sheet is written whole before the next is created, so one sheet at a time is open.
  *
  * Two things exceljs 4.4 does not do are added where its writer hands a sheet's stream to the zip
  * (WorkbookWriter._openStream calls `zip.append`): a sheet's entry may join the zip later than the
