@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { RunningServer } from '../../server/index.js';
 import { recordAudit } from '../../server/services/audit/record-audit.js';
+import { verifyAuditChain } from '../../server/services/audit/verify-chain.js';
 import { startApiServer } from '../support/api-server.js';
 import { signedIn, type Agent } from './evidence-seed.js';
 
@@ -62,6 +63,22 @@ describe('audit trail', () => {
     await server.db('audit_events').where({ id: ids[11] }).delete();
     const response = await auditor.get('/api/v1/audit/verify').expect(200);
     expect(response.body).toMatchObject({ ok: false, checked: 11, firstBrokenId: ids[11] });
+  });
+
+  it('when a JSON column holds another spelling of the same value, then verify still answers ok; a changed value does not', async () => {
+    // The hash covers the canonical JSON; stored text with spaces and other key order is the same content.
+    await server.db('audit_events').where({ id: ids[5] }).update({ after_json: '{ "n" : 6 }' });
+    await server.db('audit_events').where({ id: ids[6] }).update({ before_json: '{"n":6.0}' });
+    expect((await auditor.get('/api/v1/audit/verify').expect(200)).body).toEqual({ ok: true, checked: 12 });
+    await server.db('audit_events').where({ id: ids[6] }).update({ before_json: '{"n":6.5}' });
+    const response = await auditor.get('/api/v1/audit/verify').expect(200);
+    expect(response.body).toMatchObject({ ok: false, checked: 6, firstBrokenId: ids[6] });
+  });
+
+  it('when the verification walks pages smaller than the chain, then a deleted row is still found at the page border', async () => {
+    await server.db('audit_events').where({ id: ids[3] }).delete();
+    expect(await verifyAuditChain(server.db, undefined, 2)).toMatchObject({ ok: false, checked: 3, firstBrokenId: ids[4] });
+    expect(await verifyAuditChain(server.db, undefined, 4)).toMatchObject({ ok: false, checked: 3, firstBrokenId: ids[4] });
   });
 
   it('when the streaming variant is asked for, then NDJSON progress lines end with the verdict', async () => {

@@ -8,8 +8,11 @@ import { join } from 'node:path';
 import type { RunningServer } from '../../server/index.js';
 import { claimNextExportJob, runExportJob } from '../../server/jobs/export-jobs.js';
 import { startApiServer } from '../support/api-server.js';
-import { injectionBadges, seedPlant, signedIn, type Agent, type Seeded } from './evidence-seed.js';
+import { controlCharacterReason, injectionBadges, seedPlant, signedIn, type Agent, type Seeded } from './evidence-seed.js';
 import { parseCsv, sha256, unzip } from './evidence-zip.js';
+
+// The stored reason as a worksheet holds it: ECMA-376's _xHHHH_ for what XML 1.0 cannot carry.
+const reasonInWorkbook = 'Retested quietly_x0007_ (bell)_x000D_\nsee _x005F_x0041_ in the log_xFFFF_';
 
 type DbRun = { id: number; run_uuid: string; serial: string; product: string; attempt: number; started_at: Date; station: string; operator_badge: string; revision: number; verdict: string };
 
@@ -76,13 +79,16 @@ describe('evidence pack contents', () => {
       counts: { motors: 6, testRuns: runs.length, measurements: Number(measured!.n), csvRows: Number(measured!.n), products: ['DC-40', 'PM-150'] },
     });
     expect(manifest.notes.csvInjection).toMatch(/single quote.*OWASP/);
+    expect(manifest.notes.workbookText).toMatch(/_xHHHH_ \(ECMA-376 ST_Xstring\)/);
   });
 
   it('when the CSV is read, then it has one line per measurement matching the database, with formula-like text quoted', async () => {
     const rows = parseCsv(files.get(`fluxtrail-pack-${status.id}-measurements.csv`)!.toString('utf8'));
     expect(rows[0]).toEqual(['serial', 'run_id', 'attempt', 'characteristic', 'value', 'unit', 'lsl', 'usl', 'verdict', 'station', 'operator_badge', 'started_at_utc']);
+    // Product by product (code order), each product's runs by id, each run's results in test-plan order.
     const expected = await server.db({ ms: 'measurements' }).join({ c: 'characteristics' }, 'c.id', 'ms.characteristic_id')
-      .whereIn('ms.run_id', runs.map((r) => r.id)).orderBy([{ column: 'ms.run_id' }, { column: 'c.sort_order' }])
+      .join({ p: 'products' }, 'p.id', 'c.product_id')
+      .whereIn('ms.run_id', runs.map((r) => r.id)).orderBy([{ column: 'p.code' }, { column: 'ms.run_id' }, { column: 'c.sort_order' }])
       .select('ms.run_id', 'c.code', 'c.unit', 'ms.value', 'ms.lsl', 'ms.usl', 'ms.verdict');
     const byId = new Map(runs.map((r) => [r.id, r]));
     const quoteIfFormula = (text: string) => (/^[=+\-@]/.test(text) ? `'${text}` : text);
@@ -149,6 +155,15 @@ describe('evidence pack contents', () => {
     }
   });
 
+  it('when the workbook\'s parts are listed, then Summary is the first tab yet its sheet is the last one in the zip, and no cell holds a formula', async () => {
+    const parts = await unzip(files.get(`fluxtrail-pack-${status.id}-workbook.xlsx`)!);
+    const sheetParts = [...parts.keys()].filter((name) => name.startsWith('xl/worksheets/sheet'));
+    expect(sheetParts).toHaveLength(workbook.worksheets.length);
+    expect(sheetParts.at(-1)).toBe('xl/worksheets/sheet1.xml');
+    expect(parts.get('xl/workbook.xml')!.toString('utf8')).toMatch(/<sheets><sheet sheetId="1" name="Summary"/);
+    for (const name of sheetParts) expect(parts.get(name)!.toString('utf8'), name).not.toMatch(/<f[ >]/);
+  });
+
   it('when the sheets are inspected, then headers are frozen and carry an autofilter', () => {
     for (const sheet of workbook.worksheets) {
       expect(sheet.views[0], sheet.name).toMatchObject({ state: 'frozen', ySplit: 1 });
@@ -170,6 +185,8 @@ describe('evidence pack contents', () => {
     expect(stations.map((s) => [s[0], s[7]])).toEqual([['EOL-1', 'CAL-EOL-1-1'], ['EOL-1', 'CAL-EOL-1-2'], ['EOL-2', 'CAL-EOL-2-1'], ['EOL-2', 'CAL-EOL-2-2']]);
     const holds = values('Holds');
     expect(holds.map((h) => [h[1], h[2], h[4]])).toEqual([['motor', 'PM150-0003', 'Noise at run-up; listen again']]);
+    expect(controlCharacterReason).toContain('\u0007');
+    expect(holds[0][9]).toBe(reasonInWorkbook);
     const audit = values('Audit extract');
     const expectedEvents = await server.db('audit_events')
       .where((q) => q.where({ entity_type: 'motor', entity_id: 'PM150-0003' }).orWhere({ entity_type: 'motor', entity_id: 'DC40-0002' })
@@ -206,4 +223,28 @@ describe('evidence pack contents', () => {
       rmSync(dir, { recursive: true, force: true });
     }
   }, 60_000);
+
+  it('when LibreOffice converts every sheet, then each one reads back with the values exceljs sees', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'fluxtrail-lo-'));
+    try {
+      const xlsx = join(dir, 'pack.xlsx');
+      writeFileSync(xlsx, files.get(`fluxtrail-pack-${status.id}-workbook.xlsx`)!);
+      // Token 12 = -1: one CSV per sheet, named pack-<sheet>.csv (LibreOffice 7.2 and later).
+      execFileSync('/usr/bin/libreoffice', ['--headless', `-env:UserInstallation=file://${join(dir, 'profile')}`,
+        '--convert-to', 'csv:Text - txt - csv (StarCalc):44,34,76,1,,0,false,true,false,false,false,-1', '--outdir', dir, xlsx], { timeout: 60_000, stdio: 'pipe' });
+      const sheetFile = (name: string) => parseCsv(readFileSync(join(dir, `pack-${name}.csv`), 'utf8'));
+      for (const sheet of workbook.worksheets) {
+        const fromLibreOffice = sheetFile(sheet.name);
+        expect(fromLibreOffice[0], sheet.name).toEqual((sheet.getRow(1).values as ExcelJS.CellValue[]).slice(1).map(String));
+        expect(fromLibreOffice.length, sheet.name).toBe(sheet.rowCount);
+      }
+      const results = sheetFile('Results PM-150');
+      const first = workbook.getWorksheet('Results PM-150')!.getRow(2);
+      expect(results[1].slice(0, 3)).toEqual([first.getCell(1).value, first.getCell(2).value, String(first.getCell(3).value)]);
+      expect(workbook.worksheets.filter((w) => w.name.startsWith('Audit extract')).flatMap((w) => sheetFile(w.name).map((r) => r[7]))).toContain('=cmd|calc');
+      expect(sheetFile('Holds')[1][9]).toBe(reasonInWorkbook);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  }, 90_000);
 });

@@ -18,6 +18,8 @@ export async function signedIn(appUrl: string, login: string): Promise<Agent> {
   };
 }
 
+/** A release reason with characters a worksheet cannot hold as they are (XML 1.0 §2.2): BEL, CR, U+FFFF, and a literal escape. */
+export const controlCharacterReason = 'Retested quietly\u0007 (bell)\r\nsee _x0041_ in the log\uFFFF';
 export const injectionBadges = ['=HYPERLINK("http://attacker.invalid","open")', '+1', '-2', '@SUM(A1:A9)'];
 
 const t0 = Date.UTC(2026, 10, 3, 6, 0, 0);
@@ -109,7 +111,7 @@ export async function seedPlant(db: Knex) {
     }
   }
   await db('holds').insert([
-    { motor_id: motors['PM150-0003'], kind: 'manual', reason: 'Noise at run-up; listen again', placed_by: 'Quinn Author', placed_at: at(200), released_by: 'Quinn Author', released_at: at(260), release_reason: 'Retested quietly' },
+    { motor_id: motors['PM150-0003'], kind: 'manual', reason: 'Noise at run-up; listen again', placed_by: 'Quinn Author', placed_at: at(200), released_by: 'Quinn Author', released_at: at(260), release_reason: controlCharacterReason },
     { lot_id: lots['LOT-B'], kind: 'manual', reason: 'Stator lot ST-77 under supplier review', placed_by: 'Quinn Author', placed_at: at(300) },
   ]);
   const actor = { name: 'Quinn Author', role: 'quality' };

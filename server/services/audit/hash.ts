@@ -1,4 +1,4 @@
-import { createHash } from 'node:crypto';
+import { hash } from 'node:crypto';
 
 export type AuditContent = {
   occurredAt: string;
@@ -12,6 +12,9 @@ export type AuditContent = {
   reason: string | null;
 };
 
+/** An event's content as stored: the JSON columns still as the canonical text recordAudit wrote. */
+export type StoredAuditContent = Omit<AuditContent, 'before' | 'after'> & { beforeJson: string | null; afterJson: string | null };
+
 /** JSON with object keys sorted, so the same content always hashes the same way. */
 export function canonicalJson(value: unknown): string {
   if (value === undefined) return 'null';
@@ -24,9 +27,28 @@ export function canonicalJson(value: unknown): string {
   return `{${entries.map(([k, v]) => `${JSON.stringify(k)}:${canonicalJson(v)}`).join(',')}}`;
 }
 
-/** SHA-256 over the previous row's hash and this row's canonical content (a hash chain). */
+function jsonText(value: string | null): string {
+  return value === null ? 'null' : JSON.stringify(value);
+}
+
+/**
+ * canonicalJson of the content, built from the stored columns without parsing and re-writing the
+ * JSON ones: the keys in canonicalJson's sorted order, the stored JSON text spliced in as is. It
+ * equals canonicalJson(content) whenever the stored text is canonical, which recordAudit ensures.
+ */
+export function storedContentJson(c: StoredAuditContent): string {
+  return `{"action":${JSON.stringify(c.action)},"actor":${JSON.stringify(c.actor)},"actorRole":${jsonText(c.actorRole)},`
+    + `"after":${c.afterJson ?? 'null'},"before":${c.beforeJson ?? 'null'},"entityId":${JSON.stringify(c.entityId)},`
+    + `"entityType":${JSON.stringify(c.entityType)},"occurredAt":${JSON.stringify(c.occurredAt)},"reason":${jsonText(c.reason)}}`;
+}
+
+/** SHA-256 (hex) over the previous row's hash, a line break and this row's canonical content (a hash chain). */
+export function chainHash(prevHash: string, contentJson: string): string {
+  return hash('sha256', `${prevHash}\n${contentJson}`);
+}
+
 export function auditHash(prevHash: string, content: AuditContent): string {
-  return createHash('sha256').update(prevHash).update('\n').update(canonicalJson(content)).digest('hex');
+  return chainHash(prevHash, canonicalJson(content));
 }
 
 export const genesisHash = '0'.repeat(64);

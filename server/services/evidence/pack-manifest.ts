@@ -30,6 +30,8 @@ export function buildManifest(origin: PackOrigin, filter: PackFilter, totals: Pa
     notes: {
       hashes: 'SHA-256 in lower-case hex over each file\'s exact bytes. The zip itself is hashed by Fluxtrail and shown with the pack.',
       csvInjection: csvInjectionNote,
+      workbookText: 'Characters a workbook cannot hold as they are (control characters other than tab and line feed, carriage return, U+FFFE, U+FFFF) '
+        + 'are written in the workbook as _xHHHH_ (ECMA-376 ST_Xstring), which Excel reads back as the character; the CSV holds every text exactly as stored.',
       times: 'All times are UTC.',
       retention: 'Keep this pack with the records it evidences for the retention period required by the customer and by IATF 16949 §7.5.3.2.1.',
     },

@@ -40,29 +40,49 @@ export function packRuns(db: Knex, filter: PackFilter): Knex.QueryBuilder {
   return runWindow(filter, packMotors(db, filter).join({ r: 'test_runs' }, 'r.motor_id', 'm.id'));
 }
 
+export type PackProduct = { id: number; code: string; name: string };
+
+/** The products of the pack's motors, by code: one Results sheet each. */
+export async function packProducts(db: Knex, filter: PackFilter): Promise<PackProduct[]> {
+  const rows = (await packMotors(db, filter).distinct('p.id', 'p.code', 'p.name').orderBy('p.code')) as PackProduct[];
+  return rows.map((p) => ({ id: Number(p.id), code: p.code, name: p.name }));
+}
+
 export type PackTotals = {
   motors: number;
   runs: number;
   measurements: number;
   motorStatus: Record<string, number>;
   runVerdicts: Record<string, number>;
-  products: Array<{ id: number; code: string; name: string }>;
+  products: PackProduct[];
+  /** Ids of the stations and of the limit revisions behind the pack's runs. */
+  stationIds: number[];
+  limitSetIds: number[];
 };
 
-/** Counted once before writing: drives the progress bar and fills the Summary sheet. */
+/**
+ * Counted once: drives the progress bar and fills the Summary sheet and the manifest. The queries
+ * are independent and run side by side on their own connections.
+ */
 export async function countPack(db: Knex, filter: PackFilter): Promise<PackTotals> {
-  const statusRows = (await packMotors(db, filter).groupBy('m.status').select('m.status').count({ n: '*' })) as Array<{ status: string; n: number }>;
-  const verdictRows = (await packRuns(db, filter).groupBy('r.verdict').select('r.verdict').count({ n: '*' })) as Array<{ verdict: string; n: number }>;
-  const measured = (await packRuns(db, filter).join({ ms: 'measurements' }, 'ms.run_id', 'r.id').count({ n: '*' }).first()) as { n: number } | undefined;
-  const products = (await packMotors(db, filter).distinct('p.id', 'p.code', 'p.name').orderBy('p.code')) as PackTotals['products'];
+  const [statusRows, runRows, measured, products] = await Promise.all([
+    packMotors(db, filter).groupBy('m.status').select('m.status').count({ n: '*' }) as Promise<Array<{ status: string; n: number }>>,
+    packRuns(db, filter).groupBy('r.verdict', 'r.station_id', 'r.limit_set_id').select('r.verdict', 'r.station_id', 'r.limit_set_id')
+      .count({ n: '*' }) as Promise<Array<{ verdict: string; station_id: number; limit_set_id: number | null; n: number }>>,
+    packRuns(db, filter).join({ ms: 'measurements' }, 'ms.run_id', 'r.id').count({ n: '*' }).first() as Promise<{ n: number } | undefined>,
+    packProducts(db, filter),
+  ]);
   const motorStatus = Object.fromEntries(statusRows.map((row) => [row.status, Number(row.n)]));
-  const runVerdicts = Object.fromEntries(verdictRows.map((row) => [row.verdict, Number(row.n)]));
+  const runVerdicts: Record<string, number> = {};
+  for (const row of runRows) runVerdicts[row.verdict] = (runVerdicts[row.verdict] ?? 0) + Number(row.n);
   return {
     motors: Object.values(motorStatus).reduce((a, b) => a + b, 0),
     runs: Object.values(runVerdicts).reduce((a, b) => a + b, 0),
     measurements: Number(measured?.n ?? 0),
     motorStatus,
     runVerdicts,
-    products: products.map((p) => ({ id: Number(p.id), code: p.code, name: p.name })),
+    products,
+    stationIds: [...new Set(runRows.map((row) => Number(row.station_id)))],
+    limitSetIds: [...new Set(runRows.filter((row) => row.limit_set_id !== null).map((row) => Number(row.limit_set_id)))],
   };
 }

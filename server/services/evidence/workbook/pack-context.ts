@@ -1,7 +1,7 @@
-import type ExcelJS from 'exceljs';
 import type { Knex } from 'knex';
 import type { PackFilter } from '../pack-filter.js';
 import type { PackTotals } from '../pack-scope.js';
+import type { PackWorkbook } from './pack-workbook.js';
 
 /** Who asked for the pack and when: printed on the Summary sheet and in the manifest. */
 export type PackOrigin = { packId: number; requestedBy: string; requestedRole: string; requestedAt: Date; version: string };
@@ -9,13 +9,18 @@ export type PackOrigin = { packId: number; requestedBy: string; requestedRole: s
 /** Everything a sheet writer needs; `advance` reports rows written and throws when the job is cancelled. */
 export type SheetContext = {
   db: Knex;
-  workbook: ExcelJS.stream.xlsx.WorkbookWriter;
+  workbook: PackWorkbook;
   filter: PackFilter;
   totals: PackTotals;
   origin: PackOrigin;
   rowCap: number;
   advance: (rows: number) => Promise<void>;
+  /** The pack's serials in order, read once and shared by the sheets that page on them. */
+  serials: () => Promise<string[]>;
 };
+
+/** What the Results pass needs: it starts before the pack's counts are in. */
+export type PassContext = Omit<SheetContext, 'totals'>;
 
 /** Excel refuses cells longer than this; longer text is cut with a visible marker. */
 const cellTextMax = 32_767;

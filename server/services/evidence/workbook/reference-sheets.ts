@@ -1,4 +1,3 @@
-import { packRuns } from '../pack-scope.js';
 import { RollingSheet, formats } from './rolling-sheet.js';
 import type { SheetContext } from './pack-context.js';
 
@@ -12,12 +11,11 @@ const date = (value: Date | null) => (value ? new Date(value) : null);
 
 /** Every limit revision that judged a run in the pack, one row per limit, with author and approver. */
 export async function writeLimitsSheet(ctx: SheetContext): Promise<void> {
-  const used = packRuns(ctx.db, ctx.filter).whereNotNull('r.limit_set_id').distinct('r.limit_set_id');
   const rows = (await ctx.db({ ls: 'limit_sets' })
     .join({ p: 'products' }, 'p.id', 'ls.product_id')
     .join({ li: 'limits' }, 'li.limit_set_id', 'ls.id')
     .join({ c: 'characteristics' }, 'c.id', 'li.characteristic_id')
-    .whereIn('ls.id', used)
+    .whereIn('ls.id', ctx.totals.limitSetIds)
     .orderBy([{ column: 'p.code' }, { column: 'ls.revision' }, { column: 'c.sort_order' }, { column: 'c.id' }])
     .select({ product: 'p.code' }, 'ls.revision', 'ls.status', 'ls.effective_from', 'ls.authored_by_name', 'ls.authored_at',
       'ls.approved_by_name', 'ls.approved_at', { characteristic: 'c.code' }, 'c.unit', 'li.lsl', 'li.nominal', 'li.usl')) as LimitRow[];
@@ -44,10 +42,9 @@ type StationRow = {
 
 /** The stations that tested the pack's motors, one row per calibration record (or one bare row). */
 export async function writeStationsSheet(ctx: SheetContext): Promise<void> {
-  const used = packRuns(ctx.db, ctx.filter).distinct('r.station_id');
   const rows = (await ctx.db({ s: 'stations' })
     .leftJoin({ sc: 'station_calibrations' }, 'sc.station_id', 's.id')
-    .whereIn('s.id', used)
+    .whereIn('s.id', ctx.totals.stationIds)
     .orderBy([{ column: 's.code' }, { column: 'sc.calibrated_on' }, { column: 'sc.id' }])
     .select('s.code', 's.line', 's.kind', 's.name', 's.calibration_due', 'sc.calibrated_on', 'sc.due', 'sc.certificate',
       'sc.recorded_by', 'sc.recorded_at')) as StationRow[];

@@ -1,4 +1,5 @@
-import { RollingSheet, type CellValue } from './rolling-sheet.js';
+import type { PackWorkbook } from './pack-workbook.js';
+import { SheetColumns, type CellValue } from './rolling-sheet.js';
 import type { SheetContext } from './pack-context.js';
 
 /** Plain-language lines for the filter, shared with the manifest's readers in mind. */
@@ -13,13 +14,11 @@ export function describeFilter(filter: SheetContext['filter']): Array<[string, s
   return lines;
 }
 
-export async function writeSummarySheet(ctx: SheetContext, csv: { name: string; sha256: string; rows: number }): Promise<void> {
-  const sheet = new RollingSheet(ctx.workbook, 'Summary', [
-    { header: 'Item', width: 28 },
-    { header: 'Value', width: 70 },
-  ], ctx.rowCap);
+type CsvFacts = { name: string; sha256: string; rows: number };
+
+function summaryRows(ctx: SheetContext, csv: CsvFacts): Array<[string, CellValue]> {
   const { totals, origin } = ctx;
-  const rows: Array<[string, CellValue]> = [
+  return [
     ['Evidence pack', origin.packId],
     ['Made by', origin.requestedBy],
     ['Role', origin.requestedRole],
@@ -41,7 +40,23 @@ export async function writeSummarySheet(ctx: SheetContext, csv: { name: string; 
     ['CSV SHA-256', csv.sha256],
     ['Times', 'All times are UTC.'],
   ];
-  for (const row of rows) sheet.addRow(row);
-  sheet.commit();
-  await ctx.advance(0);
+}
+
+/**
+ * The Summary sheet is created before any other, so it is the first tab, but written after all of
+ * them: it carries the CSV's hash, known only once the Results pass is done. Its two dozen rows
+ * stay on one sheet whatever the row cap.
+ */
+export function openSummarySheet(workbook: PackWorkbook): (ctx: SheetContext, csv: CsvFacts) => Promise<void> {
+  const columns = new SheetColumns([{ header: 'Item', width: 28 }, { header: 'Value', width: 70 }]);
+  const shape = columns.shape('Summary');
+  const { sheet, start } = workbook.addSheetWrittenLater(shape);
+  columns.prepare(sheet);
+  return async (ctx, csv) => {
+    start();
+    columns.writeHeader(sheet);
+    for (const row of summaryRows(ctx, csv)) columns.writeRow(sheet, row, shape);
+    sheet.commit();
+    await ctx.advance(0);
+  };
 }
