@@ -11,6 +11,7 @@ import { keepRawSamples } from './store-waveforms-and-readings.js';
 import type { BlobStore } from '../../blob-store/blob-store.js';
 import { bodySha256, type IngestOutcome } from './stored-run.js';
 import { storeCheckedRun } from './run-writer.js';
+import type { RunToStore } from './store-runs.js';
 
 export type IngestOptions = {
   /** The OAuth2 client posting the run; its bound station must be the run's station. Omitted by seeds and uploads. */
@@ -29,6 +30,11 @@ export type IngestOptions = {
  * calibration had expired (store-runs.ts). Idempotent per runId.
  */
 export async function ingestTestRun(db: Knex, document: TestRunDocument, options: IngestOptions = {}): Promise<IngestOutcome> {
+  return storeCheckedRun(db, await checkRun(db, document, options));
+}
+
+/** Every check of a posted run, and its verdicts: what is left is to store it (run-writer.ts). */
+export async function checkRun(db: Knex, document: TestRunDocument, options: IngestOptions = {}): Promise<RunToStore> {
   const now = options.now ?? new Date();
   const sha256 = bodySha256(document);
   // Independent reads in parallel: ingest latency is mostly round trips. A retry is not looked
@@ -54,9 +60,7 @@ export async function ingestTestRun(db: Knex, document: TestRunDocument, options
   const results = labelled.map((l) => l.result);
   const judged = judgeRun(results, product, limitSet.limits);
   const raw = await keepRawSamples(options.blobs, derived);
-  return storeCheckedRun(db, {
-    document, sha256, station, product, lotId: lot.id, results, limitSet, judged, raw, source: options.source ?? 'station', receivedAt: now,
-  });
+  return { document, sha256, station, product, lotId: lot.id, results, limitSet, judged, raw, source: options.source ?? 'station', receivedAt: now };
 }
 
 async function findStation(db: Knex, document: TestRunDocument, clientId: string | undefined): Promise<StationRef | null> {
