@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { benchCharacteristicCode, benchProductCode, type BenchDataset } from './dataset.js';
 import { clientToken, type BenchContext } from './harness.js';
-import { percentile, round, runPool } from './stats.js';
+import { machineBusyCpuMs, percentile, round, runPool } from './stats.js';
 import { connectStands, httpRequest } from './http-client.js';
 
 const runsPerMeasurement = 2000;
@@ -36,14 +36,17 @@ export async function benchIngest(ctx: BenchContext, dataset: BenchDataset, tag:
   await runPool(300, concurrentStations, (i, lane) => post(i, `${tag}2`, lane));
   ctx.log(`ingest: ${runsPerMeasurement} runs through the API, ${concurrentStations} concurrent…`);
   let start = performance.now();
+  let cpuStart = machineBusyCpuMs();
   await runPool(runsPerMeasurement, concurrentStations, (i, lane) => post(i, `${tag}0`, lane));
   const apiRunsPerS = runsPerMeasurement / ((performance.now() - start) / 1000);
+  const apiCpuMsPerRun = (machineBusyCpuMs() - cpuStart) / runsPerMeasurement;
 
   ctx.log('ingest: the same rows through knex directly (raw ceiling)…');
   const motorIds = (await ctx.db('motors').where({ lot_id: lot.id }).select('id').limit(runsPerMeasurement)).map((m) => m.id);
   const maxAttempt = await ctx.db('test_runs').where({ lot_id: lot.id }).max({ n: 'attempt' }).first();
   const attemptBase = Number(maxAttempt?.n ?? 0) + 1;
   start = performance.now();
+  cpuStart = machineBusyCpuMs();
   await runPool(runsPerMeasurement, concurrentStations, async (i) => {
     await ctx.db.transaction(async (trx) => {
       const [runId] = await trx('test_runs').insert({
@@ -56,6 +59,7 @@ export async function benchIngest(ctx: BenchContext, dataset: BenchDataset, tag:
     });
   });
   const rawRunsPerS = runsPerMeasurement / ((performance.now() - start) / 1000);
+  const rawCpuMsPerRun = (machineBusyCpuMs() - cpuStart) / runsPerMeasurement;
 
   ctx.log('look-up: serials through the API while ingest runs…');
   const serials = (await ctx.db('motors').where({ product_id: dataset.productId }).orderByRaw('RAND()').limit(500).select('serial')).map((m) => m.serial);
@@ -75,6 +79,8 @@ export async function benchIngest(ctx: BenchContext, dataset: BenchDataset, tag:
     apiRunsPerS: round(apiRunsPerS, 1),
     rawRunsPerS: round(rawRunsPerS, 1),
     apiToRawRatio: round(apiRunsPerS / rawRunsPerS, 3),
+    // CPU of the whole machine per run (app, MariaDB and the benchmark's clients together).
+    machineCpuMsPerRun: { api: round(apiCpuMsPerRun), raw: round(rawCpuMsPerRun) },
     lookupUnderIngestMs: { samples: latencies.length, p50: round(percentile(latencies, 50)), p95: round(percentile(latencies, 95)), p99: round(percentile(latencies, 99)) },
     targets: { apiToRawRatio: '≥ 0.60', lookupP95Ms: '≤ 25' },
   };

@@ -1,3 +1,5 @@
+import { readFileSync } from 'node:fs';
+
 /** Percentile of a sample by the nearest-rank method (sorted copy). */
 export function percentile(values: number[], p: number): number {
   if (values.length === 0) return Number.NaN;
@@ -36,4 +38,17 @@ export async function runPool(count: number, concurrency: number, job: (i: numbe
       await job(i, lane);
     }
   }));
+}
+
+/**
+ * The whole machine's busy CPU time so far, in milliseconds (Linux /proc/stat: user, nice, system,
+ * irq, softirq and steal of every core). Read before and after a phase, it gives the CPU that phase
+ * cost all processes together (app, MariaDB, the benchmark's own clients): steadier than a rate
+ * when the machine is shared.
+ */
+export function machineBusyCpuMs(): number {
+  const [cpu] = readFileSync('/proc/stat', 'utf8').split('\n');
+  const [, user, nice, system, , , irq, softirq, steal] = cpu.trim().split(/\s+/).map(Number);
+  const ticksPerSecond = 100; // USER_HZ on Linux
+  return ((user + nice + system + irq + softirq + steal) / ticksPerSecond) * 1000;
 }

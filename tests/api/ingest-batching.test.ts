@@ -10,7 +10,7 @@ import { jsonColumn } from '../../server/db/json-column.js';
 import { freshState, phaseTwoStep, type SpcStateData } from '../../server/services/spc/phase-two-step.js';
 import { AppError } from '../../server/errors.js';
 import { statementPool } from '../../server/db/knex.js';
-import { createPlant, createProduct, nextSerial, runDocument, type PlantFixture } from '../factories.js';
+import { createPlant, createProduct, createStation, nextSerial, runDocument, type PlantFixture } from '../factories.js';
 
 // Stands post concurrently; the writer stores the runs that arrive together in one transaction.
 // These tests post many runs at once and check that every run's record, and every summary kept
@@ -164,5 +164,51 @@ describe('ingest of runs posted at the same time', () => {
     const { episodes: _replayed, ...replayedState } = replayed;
     expect(storedState).toEqual(replayedState);
     expect(stored.ewma?.t).toBe(30);
+  });
+  it('when a batch holds runs from a stand overdue for calibration, then every run is stored once and each of those motors is held once', async () => {
+    // A calibration hold writes the audit chain, which the writer's hand-driven transaction cannot: the batch goes through a knex one.
+    const overdue = await createStation(server.db, { calibrationDue: '2020-01-31', clientId: null });
+    const documents = Array.from({ length: 12 }, (_, i) => runDocument(plant, i % 4 === 0 ? { station: overdue.code } : {}));
+
+    const outcomes = await Promise.all(documents.map((d) => ingestTestRun(server.db, d)));
+
+    expect(outcomes.map((o) => o.status)).toEqual(documents.map(() => 201));
+    expect((await server.db('test_runs').pluck('run_uuid')).sort()).toEqual(documents.map((d) => d.runId).sort());
+    const overdueSerials = documents.filter((_, i) => i % 4 === 0).map((d) => d.serial).sort();
+    const flagged = await server.db('test_runs').join('motors', 'motors.id', 'test_runs.motor_id').where({ calibration_ok: false }).pluck('motors.serial');
+    expect(flagged.sort()).toEqual(overdueSerials);
+    const holds = await server.db('holds').join('motors', 'motors.id', 'holds.motor_id').where({ 'holds.kind': 'calibration' }).pluck('motors.serial');
+    expect(holds.sort()).toEqual(overdueSerials);
+    const statuses = await server.db('motors').whereIn('serial', overdueSerials).pluck('status');
+    expect(statuses).toEqual(overdueSerials.map(() => 'on hold'));
+    const audited = await server.db('audit_events').where({ action: 'hold.placed' }).count({ n: '*' }).first();
+    expect(Number(audited?.n)).toBe(overdueSerials.length);
+  });
+
+  it('when a signal opens inside a batch, then the batch is stored whole once and the signal opened once, audited', async () => {
+    const quality = (await signIn(server.url, 'quality')).cookie;
+    const ke = plant.product.characteristics.find((c) => c.code === 'bemf.ke')!.id;
+    for (let i = 0; i < 100; i++) await ingestTestRun(server.db, withValue(plant, 'bemf.ke', i % 2 === 0 ? 49.9 : 50.1));
+    const post = (path: string) => request(server.url).post(path).set('cookie', quality).set('x-fluxtrail-csrf', '1');
+    const trial = await post(`/api/v1/spc/characteristics/${ke}/trial-limits`).send({ chartKind: 'ewma' }).expect(201);
+    await post(`/api/v1/spc/control-limits/${trial.body.id}/freeze`).send({}).expect(200);
+
+    // One in control (it goes alone: the writer was idle), then 19 far above the control limits,
+    // written together: the first of them opens a signal, the rest continue its episode.
+    const documents = Array.from({ length: 20 }, (_, i) => withValue(plant, 'bemf.ke', i === 0 ? 50 : 51.5));
+    const outcomes = await Promise.all(documents.map((d) => ingestTestRun(server.db, d)));
+
+    expect(outcomes.map((o) => o.status)).toEqual(documents.map(() => 201));
+    expect(await server.db('test_runs').whereIn('run_uuid', documents.map((d) => d.runId)).count({ n: '*' })).toEqual([{ n: 20 }]);
+    const signals = await server.db('signals').where({ characteristic_id: ke }).pluck('id');
+    expect(signals).toHaveLength(1);
+    const opened = await server.db('audit_events').where({ action: 'signal.opened', entity_type: 'signal' }).pluck('entity_id');
+    expect(opened.map(Number)).toEqual(signals.map(Number));
+    // Every value was stepped through exactly once, the batch tried by hand first included.
+    const stored = jsonColumn<SpcStateData>((await server.db('spc_state').where({ characteristic_id: ke }).first('state_json')).state_json);
+    expect(stored.ewma?.t).toBe(20);
+    // The 18 values after the one that opened it continue its episode, each once.
+    const points = await server.db('signal_points').where({ signal_id: signals[0] }).count({ n: '*' }).first();
+    expect(Number(points?.n)).toBe(18);
   });
 });

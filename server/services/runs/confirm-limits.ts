@@ -6,12 +6,12 @@ import { judgeRun } from './judge-run.js';
 import type { RunToStore } from './store-runs.js';
 
 /**
- * Inside the ingest transaction, with the approved revisions of the batch's products as read there:
+ * For an ingest batch, with the approved revisions of the batch's products as read there:
  * makes sure each run is judged by the revision in force at its start. A run judged before an
  * approval that now applies to it is judged again here; one left with no revision in force is
  * refused, as it would have been had the approval come first. Returns the runs judged again.
  */
-export async function confirmLimitsInForce(trx: Knex.Transaction, runs: RunToStore[], revisions: ReadonlyMap<number, ApprovedRevision[]>): Promise<RunToStore[]> {
+export async function confirmLimitsInForce(db: Knex, runs: RunToStore[], revisions: ReadonlyMap<number, ApprovedRevision[]>): Promise<RunToStore[]> {
   const judgedAgain: RunToStore[] = [];
   for (const run of runs) {
     const inForce = revisionInForce(revisions.get(run.product.id) ?? [], new Date(run.document.startedAt));
@@ -19,7 +19,8 @@ export async function confirmLimitsInForce(trx: Knex.Transaction, runs: RunToSto
     if (!inForce) {
       throw invalid([{ field: 'startedAt', message: `no approved limit revision of ${run.product.code} was in force at ${run.document.startedAt}` }]);
     }
-    run.limitSet = await withLimits(trx, inForce);
+    // An approved revision's limits never change, so any connection may read them.
+    run.limitSet = await withLimits(db, inForce);
     run.judged = judgeRun(run.results, run.product, run.limitSet.limits);
     judgedAgain.push(run);
   }

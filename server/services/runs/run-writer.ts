@@ -1,7 +1,10 @@
 import type { Knex } from 'knex';
 import { answerForRetry, type IngestOutcome } from './stored-run.js';
-import { storeRuns, type RunToStore } from './store-runs.js';
+import { calibrationOkFor, storeRuns, transactionChannel, type RunToStore } from './store-runs.js';
 import { statementPool } from '../../db/knex.js';
+import { directTransaction } from '../../db/direct-transaction.js';
+import { acceptsSeveralStatements, TransactionNeeded } from '../../db/statements.js';
+import type { TestRunResponse } from '../../schemas/test-run.js';
 
 /** A batch stays well inside one packet and one short transaction. */
 const maxRunsPerBatch = 32;
@@ -109,7 +112,7 @@ class RunWriter {
   private async write(batch: Pending[]): Promise<void> {
     if (batch.length > 1) {
       try {
-        const answers = await this.db.transaction((trx) => storeRuns(trx, batch.map((p) => p.run)));
+        const answers = await storeInOneTransaction(this.db, batch.map((p) => p.run));
         batch.forEach((p, i) => p.resolve({ status: 201, body: answers[i] }));
         return;
       } catch {
@@ -124,6 +127,22 @@ class RunWriter {
       }
     }
   }
+}
+
+/**
+ * Runs in one transaction: driven by hand on a multi-statement pool (the usual case), or as a knex
+ * transaction (a savepoint inside a caller's) when a run needs one (a calibration hold, an SPC
+ * signal opening) or the pool takes one statement at a time.
+ */
+async function storeInOneTransaction(db: Knex, runs: RunToStore[]): Promise<TestRunResponse[]> {
+  if (!db.isTransaction && acceptsSeveralStatements(db) && runs.every(calibrationOkFor)) {
+    try {
+      return await directTransaction(db, (send) => storeRuns({ db, trx: null, send }, runs));
+    } catch (error) {
+      if (!(error instanceof TransactionNeeded)) throw error;
+    }
+  }
+  return db.transaction((trx) => storeRuns(transactionChannel(trx), runs));
 }
 
 const writers = new WeakMap<Knex, RunWriter>();
@@ -146,7 +165,7 @@ export function storeCheckedRun(db: Knex, run: RunToStore): Promise<IngestOutcom
 async function storeAlone(db: Knex, run: RunToStore): Promise<IngestOutcome> {
   for (let attempt = 1; ; attempt++) {
     try {
-      const [body] = await db.transaction((trx) => storeRuns(trx, [run]));
+      const [body] = await storeInOneTransaction(db, [run]);
       return { status: 201, body };
     } catch (error) {
       if (!isRetryable(error)) throw error;

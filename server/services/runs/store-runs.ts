@@ -2,7 +2,7 @@ import type { Knex } from 'knex';
 import { invalid } from '../../errors.js';
 import type { ResultInput, TestRunDocument, TestRunResponse } from '../../schemas/test-run.js';
 import { motorsForRunsStatement, pointMotorsAtRunsStatement } from '../motors/refresh-motor-status.js';
-import { runStatements, type Statement } from '../../db/statements.js';
+import { runStatements, TransactionNeeded, type Statement } from '../../db/statements.js';
 import { placeHold } from '../holds/place-hold.js';
 import { spcStateLockStatement, spcStatementsAfterIngest, type SpcStateRow } from '../spc/evaluate-after-ingest.js';
 import { yieldStatementsAfterIngest } from '../yield/update-yield-rollups.js';
@@ -12,7 +12,8 @@ import type { judgeRun } from './judge-run.js';
 import type { ProductRef } from './reference-data.js';
 import type { StationRef } from './station-of-client.js';
 import { confirmLimitsInForce } from './confirm-limits.js';
-import { storeWaveformsAndReadings, type KeptRawData } from './store-waveforms-and-readings.js';
+import { waveformsAndReadingsStatements, type KeptRawData } from './store-waveforms-and-readings.js';
+import type { SendStatements } from '../../db/direct-transaction.js';
 
 /** A run that passed every check and has been judged: all that is left is to write it. */
 export type RunToStore = {
@@ -22,23 +23,46 @@ export type RunToStore = {
   raw: KeptRawData; source: 'station' | 'upload'; receivedAt: Date;
 };
 
+/**
+ * Where a batch's statements go: a knex transaction (`trx`), or a transaction driven by hand on a
+ * multi-statement connection (directTransaction, `trx` null), which cannot run the rare writes
+ * that read as they go (calibration holds, opened signals: TransactionNeeded). `db` builds
+ * statements and reads what never changes once written (approved limits).
+ */
+export type BatchChannel = { db: Knex; trx: Knex.Transaction | null; send: SendStatements };
+
+/** A channel over a knex transaction. */
+export function transactionChannel(trx: Knex.Transaction): BatchChannel {
+  return { db: trx, trx, send: (statements) => runStatements(trx, statements) };
+}
+
+/** The calibration due date is a plant calendar date, so it is compared with the stand's local date. */
+export function calibrationOkFor(run: RunToStore): boolean {
+  return run.station.calibrationDue >= run.document.startedAt.slice(0, 10);
+}
+
 type LockedMotor = { id: number; serial: string; product_id: number; lot_id: number; attempts: number };
 
 /**
- * Writes a batch of checked runs of distinct serials in the caller's transaction and returns each
+ * Writes a batch of checked runs of distinct serials in the channel's transaction and returns each
  * run's answer, in the order given. Every table gets one statement for the whole batch, and the
- * statements travel in three round trips (runStatements): reads and the motor rows; the runs and
- * the SPC state they lock; every other write. Hot rows (SPC state, display blocks, yield counters)
+ * statements travel in three round trips: reads and the motor rows; the runs and the SPC state
+ * they lock; every other write (on a direct channel the first carries START TRANSACTION and the
+ * last COMMIT). Hot rows (SPC state, display blocks, yield counters)
  * are thus locked once per batch, for a short time. Lock order, as in every ingest: motor rows (by
  * serial) → runs → SPC state → measurements, motor pointers, display blocks → yield rollups →
  * calibration holds and their audit. Throws when any run cannot be stored (a serial of another
- * product or lot, a runId already taken): the caller rolls back and stores the runs one by one.
+ * product or lot, a runId already taken): the caller rolls back and stores the runs one by one;
+ * on a direct channel, TransactionNeeded before anything is kept: the caller uses a knex one.
  */
-export async function storeRuns(trx: Knex.Transaction, runs: RunToStore[]): Promise<TestRunResponse[]> {
+export async function storeRuns(channel: BatchChannel, runs: RunToStore[]): Promise<TestRunResponse[]> {
+  const { db, trx, send } = channel;
+  const holds = runs.filter((run) => !calibrationOkFor(run));
+  if (holds.length > 0 && !trx) throw new TransactionNeeded('a calibration hold is placed');
   const bySerial = [...runs].sort((a, b) => (a.document.serial < b.document.serial ? -1 : a.document.serial > b.document.serial ? 1 : 0));
   const productIds = [...new Set(runs.map((run) => run.product.id))];
-  const [revisionRows, calendarRows, motorRows] = await runStatements(trx, [
-    approvedRevisionsStatement(trx, productIds),
+  const [revisionRows, calendarRows, motorRows] = await send([
+    approvedRevisionsStatement(db, productIds),
     shiftCalendarStatement,
     motorsForRunsStatement(bySerial.map((run) => ({
       serial: run.document.serial, productId: run.product.id, lotId: run.lotId, stationId: run.station.id,
@@ -46,12 +70,11 @@ export async function storeRuns(trx: Knex.Transaction, runs: RunToStore[]): Prom
     }))),
   ]) as [Parameters<typeof rememberRevisionRows>[1], Parameters<typeof shiftCalendarFromRows>[0], LockedMotor[]];
   const motors = checkedMotors(runs, motorRows);
-  await confirmLimitsInForce(trx, runs, rememberRevisionRows(productIds, revisionRows));
+  await confirmLimitsInForce(db, runs, rememberRevisionRows(productIds, revisionRows));
 
   const stored = runs.map((run) => {
     const motor = motors.get(run.document.serial) as LockedMotor;
-    // The calibration due date is a plant calendar date, so compare it with the stand's local date.
-    const calibrationOk = run.station.calibrationDue >= run.document.startedAt.slice(0, 10);
+    const calibrationOk = calibrationOkFor(run);
     const response: TestRunResponse = {
       runId: run.document.runId, serial: run.document.serial, attempt: motor.attempts, verdict: run.judged.verdict, limitRevision: run.limitSet.revision,
       results: run.judged.results.map(({ characteristicId: _id, ...result }) => result),
@@ -59,27 +82,27 @@ export async function storeRuns(trx: Knex.Transaction, runs: RunToStore[]): Prom
     return { run, motorId: motor.id, attempt: motor.attempts, calibrationOk, response, runId: 0 };
   });
   const characteristicIds = [...new Set(runs.flatMap((run) => run.judged.results.map((r) => r.characteristicId)))].sort((a, b) => a - b);
-  const [runRows, stateRows] = await runStatements(trx, [insertRunsStatement(stored), spcStateLockStatement(trx, characteristicIds)]) as [Array<{ id: number | string; run_uuid: string }>, SpcStateRow[]];
+  const [runRows, stateRows] = await send([insertRunsStatement(stored), spcStateLockStatement(db, characteristicIds)]) as [Array<{ id: number | string; run_uuid: string }>, SpcStateRow[]];
   const runIds = new Map(runRows.map((row) => [row.run_uuid, Number(row.id)]));
   for (const s of stored) s.runId = runIds.get(s.run.document.runId) as number;
-  for (const s of stored) await storeWaveformsAndReadings(trx, s.runId, s.run.raw);
 
-  const spc = await spcStatementsAfterIngest(trx, stored.map((s) => ({
+  const spc = await spcStatementsAfterIngest(db, trx, stored.map((s) => ({
     runId: s.runId, motorId: s.motorId, lotId: s.run.lotId, productId: s.run.product.id, startedAt: s.run.document.startedAt,
     receivedAt: s.run.receivedAt, measurements: s.run.judged.results,
   })), stateRows);
-  const yieldRollups = await yieldStatementsAfterIngest(trx, stored.map((s) => ({
+  const yieldRollups = yieldStatementsAfterIngest(db, stored.map((s) => ({
     motorId: s.motorId, runId: s.runId, attempt: s.attempt, startedAt: new Date(s.run.document.startedAt), verdict: s.run.judged.verdict,
     productId: s.run.product.id, lotId: s.run.lotId, station: s.run.station,
     failingCharacteristicIds: s.run.judged.results.filter((r) => r.verdict === 'fail').map((r) => r.characteristicId),
   })), shiftCalendarFromRows(calendarRows));
-  await runStatements(trx, [
+  await send([
     measurementsStatement(stored),
+    ...stored.flatMap((s) => waveformsAndReadingsStatements(db, s.runId, s.run.raw)),
     pointMotorsAtRunsStatement(stored.map((s) => ({ motorId: s.motorId, runId: s.runId, verdict: s.run.judged.verdict }))),
     ...spc.statements,
     ...yieldRollups,
-  ]);
-  for (const s of stored.filter((one) => !one.calibrationOk)) await holdForCalibration(trx, s.run);
+  ], { last: holds.length === 0 });
+  if (trx) for (const run of holds) await holdForCalibration(trx, run);
   return stored.map((s) => s.response);
 }
 

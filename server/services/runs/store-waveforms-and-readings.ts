@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import type { Statement } from '../../db/statements.js';
 import type { BlobStore } from '../../blob-store/blob-store.js';
 import type { ReadingInput } from '../../schemas/raw-data.js';
 import type { PreparedWaveform } from './derive-back-emf.js';
@@ -24,17 +25,19 @@ export async function keepRawSamples(blobs: BlobStore | undefined, raw: { wavefo
   return { waveforms, readings: raw.readings };
 }
 
-/** The waveform summaries and raw readings of one run, inside the run's ingest transaction. */
-export async function storeWaveformsAndReadings(trx: Knex.Transaction, runId: number, kept: KeptRawData): Promise<void> {
+/** The statements that store the waveform summaries and raw readings of one run (none when it has none). */
+export function waveformsAndReadingsStatements(db: Knex, runId: number, kept: KeptRawData): Statement[] {
+  const statements: Statement[] = [];
   if (kept.waveforms.length > 0) {
-    await trx('waveforms').insert(kept.waveforms.map((w) => ({
+    statements.push(db('waveforms').insert(kept.waveforms.map((w) => ({
       run_id: runId, kind: w.kind, sample_rate_hz: w.sampleRateHz, speed_rpm: w.speedRpm,
       samples_per_channel: w.samplesPerChannel, blob_sha256: w.blobSha256, summary_json: JSON.stringify(w.summary),
-    })));
+    }))).toSQL());
   }
   if (kept.readings.length > 0) {
-    await trx('raw_readings').insert(kept.readings.map(({ kind, ...reading }) => ({
+    statements.push(db('raw_readings').insert(kept.readings.map(({ kind, ...reading }) => ({
       run_id: runId, kind, reading_json: JSON.stringify(reading),
-    })));
+    }))).toSQL());
   }
+  return statements;
 }

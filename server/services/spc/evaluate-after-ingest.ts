@@ -2,7 +2,7 @@ import { jsonColumn } from '../../db/json-column.js';
 import type { Knex } from 'knex';
 import { openSignal } from '../signals/open-signal.js';
 import { displayBlocksStatement } from './display-blocks.js';
-import type { Statement } from '../../db/statements.js';
+import { TransactionNeeded, type Statement } from '../../db/statements.js';
 import { phaseTwoStep, type SpcStateData } from './phase-two-step.js';
 import type { SignalRule } from './chart-kinds.js';
 
@@ -35,12 +35,14 @@ export function spcStateLockStatement(db: Knex, characteristicIds: readonly numb
  * Judges freshly stored runs (one ingest batch) against the frozen control limits of the
  * characteristics they touched, inside the ingest transaction, given their spc_state rows as
  * locked by spcStateLockStatement: each characteristic's values are stepped through in run order;
- * signals only when a rule is broken (opened at once, rare). A rule broken again at the next plotted
+ * signals only when a rule is broken (opened at once in `trx`, rare; without one, TransactionNeeded). A rule broken again at the next plotted
  * point continues its episode; broken after an in-control point it opens a new signal. Returns the
  * statements that write the new states, the continued episodes and every value's place in the
  * chart's display summary, to be sent together with the batch's other writes.
  */
-export async function spcStatementsAfterIngest(trx: Knex.Transaction, runs: readonly IngestedRun[], stateRows: readonly SpcStateRow[]): Promise<{ statements: Statement[]; openedSignalIds: number[] }> {
+export async function spcStatementsAfterIngest(
+  db: Knex, trx: Knex.Transaction | null, runs: readonly IngestedRun[], stateRows: readonly SpcStateRow[],
+): Promise<{ statements: Statement[]; openedSignalIds: number[] }> {
   const inRunOrder = [...runs].sort((a, b) => a.runId - b.runId);
   const episodes: Episodes = { openedSignalIds: [], continued: [] };
   const updates = [];
@@ -57,8 +59,8 @@ export async function spcStatementsAfterIngest(trx: Knex.Transaction, runs: read
     updates.push({ characteristic_id: row.characteristic_id, control_limit_id: row.control_limit_id, state_json: JSON.stringify(state), last_run_id: last.runId, updated_at: last.receivedAt });
   }
   const statements: Statement[] = [];
-  if (episodes.continued.length > 0) statements.push(trx('signal_points').insert(episodes.continued).onConflict(['signal_id', 'run_id']).ignore().toSQL());
-  if (updates.length > 0) statements.push(trx('spc_state').insert(updates).onConflict('characteristic_id').merge(['state_json', 'last_run_id', 'updated_at']).toSQL());
+  if (episodes.continued.length > 0) statements.push(db('signal_points').insert(episodes.continued).onConflict(['signal_id', 'run_id']).ignore().toSQL());
+  if (updates.length > 0) statements.push(db('spc_state').insert(updates).onConflict('characteristic_id').merge(['state_json', 'last_run_id', 'updated_at']).toSQL());
   const display = displayBlocksStatement(inRunOrder.flatMap((run) => run.measurements.map((m) => ({ runId: run.runId, characteristicId: m.characteristicId, value: m.value }))));
   if (display) statements.push(display);
   return { statements, openedSignalIds: episodes.openedSignalIds };
@@ -68,7 +70,7 @@ type Episodes = { openedSignalIds: number[]; continued: Array<{ signal_id: numbe
 
 /** One Phase II step of one characteristic: the next state, with a signal opened or continued per broken rule. */
 async function judgeOneValue(
-  trx: Knex.Transaction, row: SpcStateRow, state: SpcStateData, run: IngestedRun, value: number, out: Episodes,
+  trx: Knex.Transaction | null, row: SpcStateRow, state: SpcStateData, run: IngestedRun, value: number, out: Episodes,
 ): Promise<SpcStateData> {
   const step = phaseTwoStep(state, { runId: run.runId, lotId: run.lotId, value });
   const next = step.state;
@@ -81,6 +83,8 @@ async function judgeOneValue(
       out.continued.push({ signal_id: ongoing, run_id: run.runId });
       continue;
     }
+    // Opening a signal writes the audit chain, which reads as it goes: that needs a knex transaction.
+    if (!trx) throw new TransactionNeeded('an SPC signal opens');
     const signal = await openSignal(trx, {
       characteristicId: row.characteristic_id, productId: run.productId, controlLimitId: row.control_limit_id, rule: broken.rule,
       lotId: step.judged.lotId, firstRunId: step.judged.firstRunId, patternFirstRunId: broken.patternFirstRunId, at: run.receivedAt,

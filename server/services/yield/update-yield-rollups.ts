@@ -17,24 +17,25 @@ export type StoredRunForYield = {
  * batch come back as statements, one per table, the counters summed per group first and upserted
  * in key order (so concurrent batches queue), to be sent with the batch's other writes.
  */
-export async function yieldStatementsAfterIngest(trx: Knex.Transaction, runs: readonly StoredRunForYield[], calendar: ShiftCalendar): Promise<Statement[]> {
-  for (const retest of runs.filter((run) => run.attempt > 1)) await moveFinalVerdict(trx, retest);
+export function yieldStatementsAfterIngest(db: Knex, runs: readonly StoredRunForYield[], calendar: ShiftCalendar): Statement[] {
+  const retests = runs.filter((run) => run.attempt > 1).flatMap(finalVerdictStatements);
   const firsts = runs.filter((run) => run.attempt === 1);
-  if (firsts.length === 0) return [];
+  if (firsts.length === 0) return retests;
   const filed = firsts.map((run) => {
     const slot = slotOf(calendar, run.startedAt);
     const group = { product_id: run.productId, lot_id: run.lotId, station_id: run.station.id, line: run.station.line, shift_day: slot.day };
     return { run, group, shiftCode: slot.shift, passed: run.verdict === 'pass' };
   });
   const statements: Statement[] = [
-    trx('yield_motors').insert(filed.map(({ run, group, shiftCode, passed }) => ({
+    ...retests,
+    db('yield_motors').insert(filed.map(({ run, group, shiftCode, passed }) => ({
       ...group, motor_id: run.motorId, shift_code: shiftCode, first_run_id: run.runId, first_started_at: run.startedAt,
       first_pass: passed, final_pass: passed, attempts: 1,
     }))).toSQL(),
     yieldCountsStatement(filed.map(({ group, shiftCode, passed }) => ({ ...group, shift_code: shiftCode, passed }))),
   ];
   const failures = filed.flatMap(({ run, group }) => [...new Set(run.failingCharacteristicIds)].map((characteristicId) => ({ ...group, motor_id: run.motorId, characteristic_id: characteristicId })));
-  if (failures.length > 0) statements.push(trx('yield_first_failures').insert(failures).toSQL());
+  if (failures.length > 0) statements.push(db('yield_first_failures').insert(failures).toSQL());
   return statements;
 }
 
@@ -67,17 +68,24 @@ function compareKeys(a: Omit<CountedMotor, 'passed'>, b: Omit<CountedMotor, 'pas
   return 0;
 }
 
-/** A retest: the motor stays filed where it was first tested; only its final verdict may move. */
-async function moveFinalVerdict(trx: Knex.Transaction, run: StoredRunForYield): Promise<void> {
-  const passed = run.verdict === 'pass';
-  const motor = await trx('yield_motors').where({ motor_id: run.motorId })
-    .first('shift_day', 'shift_code', 'station_id', 'line', 'lot_id', 'product_id', 'final_pass');
-  if (!motor) return;
-  await trx('yield_motors').where({ motor_id: run.motorId }).update({ final_pass: passed, attempts: run.attempt });
-  if (Boolean(motor.final_pass) !== passed) {
-    const { final_pass: _previous, ...key } = motor;
-    await trx('yield_counts').where(key).increment('passed_final', passed ? 1 : -1);
-  }
+/**
+ * A retest: the motor stays filed where it was first tested; only its final verdict may move. The
+ * group's counter moves by the change of the motor's final verdict, read in the same statement,
+ * before the motor's own row takes the new verdict. (A motor not filed yet has no row: nothing moves.)
+ */
+function finalVerdictStatements(run: StoredRunForYield): Statement[] {
+  const passed = run.verdict === 'pass' ? 1 : 0;
+  return [
+    {
+      sql: `UPDATE yield_counts c JOIN yield_motors y
+               ON c.shift_day = y.shift_day AND c.shift_code = y.shift_code AND c.station_id = y.station_id
+              AND c.line = y.line AND c.lot_id = y.lot_id AND c.product_id = y.product_id
+             SET c.passed_final = c.passed_final + (? - y.final_pass)
+           WHERE y.motor_id = ? AND y.final_pass <> ?`,
+      bindings: [passed, run.motorId, passed],
+    },
+    { sql: 'UPDATE yield_motors SET final_pass = ?, attempts = ? WHERE motor_id = ?', bindings: [passed, run.attempt, run.motorId] },
+  ];
 }
 
 /**
