@@ -1,4 +1,5 @@
 import { randomUUID } from 'node:crypto';
+import { spawn } from 'node:child_process';
 import { benchCharacteristicCode, benchProductCode, type BenchDataset } from './dataset.js';
 import { clientToken, type BenchContext } from './harness.js';
 import { machineBusyCpuMs, percentile, round, runPool } from './stats.js';
@@ -13,6 +14,34 @@ export function runDocument(serial: string, stationCode: string, lotCode: string
     startedAt: startedAt.toISOString(), finishedAt: new Date(startedAt.getTime() + 1000).toISOString(),
     operatorBadge: 'B-0002', programVersion: 'bench-1',
     results: Array.from({ length: 40 }, (_, i) => ({ characteristic: benchCharacteristicCode(i), value: 100 + ((i * 7) % 9) - 4, unit: 'V' })),
+  };
+}
+
+/**
+ * Starts bench/lookup-client.ts; `start()` waits until it has loaded, then sets it looking up;
+ * `stop()` ends it and resolves with the latencies it measured.
+ */
+function lookupClient(appUrl: string, token: string, serials: string[]) {
+  const child = spawn(process.execPath, ['--import', 'tsx', 'bench/lookup-client.ts', appUrl, token], { stdio: ['pipe', 'pipe', 'inherit'] });
+  let output = '';
+  let onReady: () => void = () => undefined;
+  const ready = new Promise<void>((resolve) => { onReady = resolve; });
+  child.stdout.on('data', (chunk: Buffer) => {
+    output += chunk.toString();
+    if (output.startsWith('ready\n')) onReady();
+  });
+  const exited = new Promise<number | null>((resolve) => child.once('exit', resolve));
+  return {
+    async start(): Promise<void> {
+      await ready;
+      child.stdin.write(`${JSON.stringify(serials)}\n`);
+    },
+    async stop(): Promise<number[]> {
+      child.stdin.end('stop\n');
+      const code = await exited;
+      if (code !== 0) throw new Error(`the look-up client exited with code ${code}`);
+      return JSON.parse(output.slice('ready\n'.length)) as number[];
+    },
   };
 }
 
@@ -63,18 +92,11 @@ export async function benchIngest(ctx: BenchContext, dataset: BenchDataset, tag:
 
   ctx.log('look-up: serials through the API while ingest runs…');
   const serials = (await ctx.db('motors').where({ product_id: dataset.productId }).orderByRaw('RAND()').limit(500).select('serial')).map((m) => m.serial);
-  const latencies: number[] = [];
-  let ingesting = true;
   stands = await connectStands(ctx.app.url, concurrentStations);
-  const load = runPool(runsPerMeasurement, concurrentStations, (i, lane) => post(i, `${tag}1`, lane)).finally(() => { ingesting = false; });
-  for (let i = 0; ingesting || i < 200; i++) {
-    const t0 = performance.now();
-    const response = await httpRequest(`${ctx.app.url}/api/v1/motors/${serials[i % serials.length]}`, { token: readToken });
-    if (response.status !== 200) throw new Error(`look-up answered ${response.status}`);
-    latencies.push(performance.now() - t0);
-    if (!ingesting && i >= 200) break;
-  }
-  await load;
+  const lookups = lookupClient(ctx.app.url, readToken, serials);
+  await lookups.start();
+  await runPool(runsPerMeasurement, concurrentStations, (i, lane) => post(i, `${tag}1`, lane));
+  const latencies = await lookups.stop();
   return {
     apiRunsPerS: round(apiRunsPerS, 1),
     rawRunsPerS: round(rawRunsPerS, 1),

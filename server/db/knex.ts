@@ -28,13 +28,14 @@ const statementPools = new WeakMap<Knex, () => Knex>();
 /**
  * One knex pool for the process. DATETIME values are read and written as UTC. Beside it, created on
  * first use and closed with it, a small pool whose connections accept several statements per round
- * trip, for the ingest writer alone (statementPool); every other query keeps one statement per
- * call, so a mistake elsewhere can never chain statements.
+ * trip (statementPool), for the two paths that must stay fast under load: the ingest writer and the
+ * motor record read; they send only statements built by knex. Every other query keeps one
+ * statement per call, so a mistake elsewhere can never chain statements.
  */
 export function createDb(db: Config['db']): Knex {
   const knex = knexFactory(knexOptions(db, { multipleStatements: false, poolMax: db.poolMax }));
   let statements: Knex | undefined;
-  statementPools.set(knex, () => (statements ??= knexFactory(knexOptions(db, { multipleStatements: true, poolMax: 4 }))));
+  statementPools.set(knex, () => (statements ??= knexFactory(knexOptions(db, { multipleStatements: true, poolMax: 8 }))));
   // Closing the app's pool closes this one too (knex defines destroy as a configurable property).
   const destroy = knex.destroy.bind(knex);
   Object.defineProperty(knex, 'destroy', {

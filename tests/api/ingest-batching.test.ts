@@ -111,7 +111,7 @@ describe('ingest of runs posted at the same time', () => {
     expect(filed).toEqual({ attempts: 3, first_run_id: runs[0].id });
   });
 
-  it('when two statements are sent in one query, then only the ingest writer\'s pool runs them', async () => {
+  it('when two statements are sent in one query, then only the pool of the ingest writer and the motor record runs them', async () => {
     // The app's pool keeps one statement per query, so a mistake elsewhere can never chain statements.
     await expect(server.db.raw('SELECT 1 AS one; SELECT 2 AS two')).rejects.toMatchObject({ code: 'ER_PARSE_ERROR' });
     const [results] = await statementPool(server.db)!.raw('SELECT 1 AS one; SELECT 2 AS two');

@@ -89,7 +89,13 @@ describe('lots API: counts, lot record, lot holds and release', () => {
     const lotHold = await write(`/api/v1/lots/${plant.lot.code}/holds`, { reason: 'Lot containment' }).expect(201);
     await write(`/api/v1/motors/${serial}/holds`, { reason: 'Noise at 3000 rpm reported' }).expect(201);
     await write(`/api/v1/holds/${lotHold.body.id}/release`, { reason: 'Lot cleared' }).expect(200);
-    expect((await get(`/api/v1/motors/${serial}`)).body.status).toBe('on hold');
+    const record = (await get(`/api/v1/motors/${serial}`)).body;
+    expect(record.status).toBe('on hold');
+    // The record shows its own hold and its lot's, newest first, and both entities' audit events in the order they happened.
+    expect(record.holds.map((h: { target: { type: string }; releasedAt: string | null }) => [h.target.type, h.releasedAt === null])).toEqual([['motor', true], ['lot', false]]);
+    expect(record.auditEvents.map((e: { entityType: string; action: string }) => [e.entityType, e.action])).toEqual([
+      ['lot', 'hold.placed'], ['motor', 'hold.placed'], ['lot', 'hold.released'],
+    ]);
   });
 
   it('when a hold is released twice, then the second answers 409 and the first release stands', async () => {

@@ -7,7 +7,7 @@ export type HoldView = {
   placedBy: string; placedAt: string; releasedBy: string | null; releasedAt: string | null; releaseReason: string | null;
 };
 
-type HoldRow = {
+export type HoldRow = {
   id: number; kind: HoldKind; reason: string; signal_id: number | null; placed_by: string; placed_at: Date;
   released_by: string | null; released_at: Date | null; release_reason: string | null;
   motor_serial: string | null; lot_code: string | null;

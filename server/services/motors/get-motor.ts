@@ -1,9 +1,11 @@
 import type { Knex } from 'knex';
 import { notFound } from '../../errors.js';
-import { componentsOfLot, type LotComponentView } from '../lots/lot-components.js';
-import { holdsQuery, toHoldView, type HoldView } from '../holds/hold-view.js';
-import { runsOfMotor, type RunView } from './motor-runs.js';
-import { auditEventsOf, type AuditEventView } from './entity-audit-events.js';
+import { componentsOfLotQuery, toComponentView, type ComponentRow, type LotComponentView } from '../lots/lot-components.js';
+import { holdsQuery, toHoldView, type HoldRow, type HoldView } from '../holds/hold-view.js';
+import { runsOfMotorStatements, runViews, type ReadingRow, type ResultRow, type RunRow, type RunView, type WaveformRow } from './motor-runs.js';
+import { auditEventsOfOneStatement, auditEventViews, type AuditRow, type AuditEventView } from './entity-audit-events.js';
+import { statementPool } from '../../db/knex.js';
+import { runStatements } from '../../db/statements.js';
 import type { MotorStatus } from './list-motors.js';
 
 export type ReworkNoteView = { id: number; action: 'rework' | 'retest'; note: string; recordedBy: string; recordedAt: string };
@@ -18,28 +20,45 @@ export type MotorRecord = {
   auditEvents: AuditEventView[];
 };
 
-/** Everything recorded about one serial: product, lot, holds (its own and its lot's), runs, notes, audit. */
+type MotorRow = {
+  id: number; serial: string; status: MotorStatus; lot_code: string; product_code: string; product_name: string; motor_kind: string;
+};
+type NoteRow = { id: number; action: 'rework' | 'retest'; note: string; recorded_by: string; recorded_at: Date };
+
+/**
+ * Everything recorded about one serial: product, lot, holds (its own and its lot's), runs, notes,
+ * audit. Every read names the motor by its serial (a subquery on the unique serial) so that all of
+ * them travel in one round trip on the multi-statement pool: a scan at the line must answer fast
+ * while the stands are posting, and on a busy server each round trip waits its turn for the CPU.
+ */
 export async function getMotor(db: Knex, serial: string): Promise<MotorRecord> {
-  const motor = await db('motors').join('products', 'products.id', 'motors.product_id').join('lots', 'lots.id', 'motors.lot_id')
-    .where('motors.serial', serial)
-    .first('motors.id', 'motors.serial', 'motors.status', 'motors.lot_id', 'lots.code as lot_code',
-      'products.code as product_code', 'products.name as product_name', 'products.motor_kind');
+  const reader = statementPool(db) ?? db;
+  const ofMotor = (column: 'id' | 'lot_id') => reader('motors').where({ serial }).select(column);
+  const lotCode = reader('motors').join('lots', 'lots.id', 'motors.lot_id').where('motors.serial', serial).select('lots.code');
+  const [motors, components, motorHolds, lotHolds, notes, runs, results, waveforms, readings, motorAudit, lotAudit] = await runStatements(reader, [
+    reader('motors').join('products', 'products.id', 'motors.product_id').join('lots', 'lots.id', 'motors.lot_id')
+      .where('motors.serial', serial)
+      .select('motors.id', 'motors.serial', 'motors.status', 'lots.code as lot_code',
+        'products.code as product_code', 'products.name as product_name', 'products.motor_kind').toSQL(),
+    componentsOfLotQuery(reader, ofMotor('lot_id')).toSQL(),
+    // Two reads, not one with OR, so each uses its index.
+    holdsQuery(reader).where('holds.motor_id', ofMotor('id')).toSQL(),
+    holdsQuery(reader).where('holds.lot_id', ofMotor('lot_id')).toSQL(),
+    reader('rework_notes').where('motor_id', ofMotor('id')).orderBy('id', 'desc').toSQL(),
+    ...runsOfMotorStatements(reader, ofMotor('id')),
+    auditEventsOfOneStatement(reader, 'motor', serial),
+    auditEventsOfOneStatement(reader, 'lot', lotCode),
+  ]) as [MotorRow[], ComponentRow[], HoldRow[], HoldRow[], NoteRow[], RunRow[], ResultRow[], WaveformRow[], ReadingRow[], AuditRow[], AuditRow[]];
+  const motor = motors[0];
   if (!motor) throw notFound(`No motor with serial ${serial}.`);
-  const [components, holds, notes, runs, auditEvents] = await Promise.all([
-    componentsOfLot(db, motor.lot_id),
-    holdsQuery(db).where((q) => q.where('holds.motor_id', motor.id).orWhere('holds.lot_id', motor.lot_id)),
-    db('rework_notes').where({ motor_id: motor.id }).orderBy('id', 'desc'),
-    runsOfMotor(db, motor.id),
-    auditEventsOf(db, [{ type: 'motor', id: motor.serial }, { type: 'lot', id: motor.lot_code }]),
-  ]);
   return {
     serial: motor.serial,
     product: { code: motor.product_code, name: motor.product_name, motorKind: motor.motor_kind },
-    lot: { code: motor.lot_code, components },
+    lot: { code: motor.lot_code, components: components.map(toComponentView) },
     status: motor.status,
-    holds: holds.map(toHoldView),
+    holds: [...motorHolds, ...lotHolds].sort((a, b) => b.id - a.id).map(toHoldView),
     reworkNotes: notes.map((n) => ({ id: n.id, action: n.action, note: n.note, recordedBy: n.recorded_by, recordedAt: n.recorded_at.toISOString() })),
-    runs,
-    auditEvents,
+    runs: runViews(runs, results, waveforms, readings),
+    auditEvents: auditEventViews([motorAudit, lotAudit]),
   };
 }

@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
 import { jsonColumn } from '../../db/json-column.js';
+import type { Statement } from '../../db/statements.js';
 
 export type RunResultView = {
   characteristic: string; name: string; unit: string; testStep: string;
@@ -14,12 +15,15 @@ export type RunView = {
   readings: Array<{ kind: string; reading: unknown }>;
 };
 
+/** A motor's id, given as a number or as a subquery that yields it. */
+export type MotorIdValue = number | Knex.QueryBuilder;
+
 /**
- * Every run of one motor, latest first, each with its results in test-plan order and the nominal
- * of the revision it was judged by. Three indexed queries however many runs the motor has.
+ * The four reads behind a motor's runs (runs, results, waveforms, readings), each through the
+ * motor's index on test_runs, to be sent together with the rest of the motor's record.
  */
-export async function runsOfMotor(db: Knex, motorId: number): Promise<RunView[]> {
-  const [runs, results, waveforms, readings] = await Promise.all([
+export function runsOfMotorStatements(db: Knex, motorId: MotorIdValue): Statement[] {
+  return [
     db('test_runs').join('stations', 'stations.id', 'test_runs.station_id')
       .leftJoin('limit_sets', 'limit_sets.id', 'test_runs.limit_set_id')
       .where('test_runs.motor_id', motorId).orderBy('test_runs.attempt', 'desc')
@@ -34,7 +38,23 @@ export async function runsOfMotor(db: Knex, motorId: number): Promise<RunView[]>
       .where('test_runs.motor_id', motorId).orderBy('waveforms.id').select('waveforms.run_id', 'waveforms.kind', 'waveforms.summary_json'),
     db('test_runs').join('raw_readings', 'raw_readings.run_id', 'test_runs.id')
       .where('test_runs.motor_id', motorId).orderBy('raw_readings.kind').select('raw_readings.run_id', 'raw_readings.kind', 'raw_readings.reading_json'),
-  ]);
+  ].map((query) => query.toSQL());
+}
+
+export type RunRow = {
+  id: number; run_uuid: string; attempt: number; verdict: 'pass' | 'fail'; started_at: Date; finished_at: Date;
+  station_code: string; station_line: string; operator_badge: string; program_version: string;
+  limit_revision: number | null; calibration_ok: number | boolean; calibration_due: Date;
+};
+export type ResultRow = {
+  run_id: number; code: string; name: string; unit: string; test_step: string;
+  value: number; lsl: number | null; nominal: number | null; usl: number | null; verdict: 'pass' | 'fail';
+};
+export type WaveformRow = { run_id: number; kind: string; summary_json: unknown };
+export type ReadingRow = { run_id: number; kind: string; reading_json: unknown };
+
+/** Every run of one motor, latest first, each with its results in test-plan order and the nominal of the revision it was judged by. */
+export function runViews(runs: RunRow[], results: ResultRow[], waveforms: WaveformRow[], readings: ReadingRow[]): RunView[] {
   return runs.map((run) => ({
     runId: run.run_uuid, attempt: run.attempt, verdict: run.verdict,
     startedAt: run.started_at.toISOString(), finishedAt: run.finished_at.toISOString(),
