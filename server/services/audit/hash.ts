@@ -15,16 +15,29 @@ export type AuditContent = {
 /** An event's content as stored: the JSON columns still as the canonical text recordAudit wrote. */
 export type StoredAuditContent = Omit<AuditContent, 'before' | 'after'> & { beforeJson: string | null; afterJson: string | null };
 
-/** JSON with object keys sorted, so the same content always hashes the same way. */
+/**
+ * JSON with object keys sorted, so the same content always hashes the same way. Written as plain
+ * loops: every posted run is hashed with it (retries are recognised by that hash).
+ */
 export function canonicalJson(value: unknown): string {
   if (value === undefined) return 'null';
   if (value === null || typeof value !== 'object') return JSON.stringify(value);
   if (value instanceof Date) return JSON.stringify(value.toISOString());
-  if (Array.isArray(value)) return `[${value.map(canonicalJson).join(',')}]`;
-  const entries = Object.entries(value as Record<string, unknown>)
-    .filter(([, v]) => v !== undefined)
-    .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
-  return `{${entries.map(([k, v]) => `${JSON.stringify(k)}:${canonicalJson(v)}`).join(',')}}`;
+  if (Array.isArray(value)) {
+    let text = '[';
+    for (let i = 0; i < value.length; i++) text += (i === 0 ? '' : ',') + canonicalJson(value[i]);
+    return `${text}]`;
+  }
+  const record = value as Record<string, unknown>;
+  // The default sort compares UTF-16 code units, as < and > do on strings.
+  const keys = Object.keys(record).sort();
+  let text = '{';
+  for (const key of keys) {
+    const member = record[key];
+    if (member === undefined) continue;
+    text += `${text.length === 1 ? '' : ','}${JSON.stringify(key)}:${canonicalJson(member)}`;
+  }
+  return `${text}}`;
 }
 
 function jsonText(value: string | null): string {
