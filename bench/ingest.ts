@@ -2,19 +2,21 @@ import { randomUUID } from 'node:crypto';
 import { spawn } from 'node:child_process';
 import { benchCharacteristicCode, benchProductCode, type BenchDataset } from './dataset.js';
 import { clientToken, type BenchContext } from './harness.js';
-import { machineBusyCpuMs, percentile, round, runPool } from './stats.js';
+import { inControlValues, machineBusyCpuMs, percentile, round, runPool } from './stats.js';
 import { connectStands, httpRequest } from './http-client.js';
 
 const runsPerMeasurement = 2000;
 const concurrentStations = 16;
 const rounds = 4;
 
+const nextValue = inControlValues(7);
+
 export function runDocument(serial: string, stationCode: string, lotCode: string, startedAt: Date) {
   return {
     runId: randomUUID(), serial, product: benchProductCode, station: stationCode, lot: lotCode,
     startedAt: startedAt.toISOString(), finishedAt: new Date(startedAt.getTime() + 1000).toISOString(),
     operatorBadge: 'B-0002', programVersion: 'bench-1',
-    results: Array.from({ length: 40 }, (_, i) => ({ characteristic: benchCharacteristicCode(i), value: 100 + ((i * 7) % 9) - 4, unit: 'V' })),
+    results: Array.from({ length: 40 }, (_, i) => ({ characteristic: benchCharacteristicCode(i), value: nextValue(), unit: 'V' })),
   };
 }
 
@@ -79,7 +81,7 @@ export async function benchIngest(ctx: BenchContext, dataset: BenchDataset, tag:
         program_version: 'bench-1', limit_set_id: dataset.limitSetId, verdict: 'pass', calibration_ok: true, calibration_due: '2099-01-01',
         body_sha256: '0'.repeat(64), response_json: answerJson, source: 'station', received_at: new Date(),
       });
-      await trx('measurements').insert(dataset.characteristicIds.map((id, k) => ({ run_id: runId, characteristic_id: id, value: 100 + k / 10, lsl: 90, usl: 110, verdict: 'pass' })));
+      await trx('measurements').insert(dataset.characteristicIds.map((id) => ({ run_id: runId, characteristic_id: id, value: nextValue(), lsl: 90, usl: 110, verdict: 'pass' })));
     });
   };
 

@@ -5,20 +5,13 @@ import { computeTrialLimits } from '../server/services/spc/compute-trial-limits.
 import { freezeControlLimits } from '../server/services/spc/freeze-control-limits.js';
 import { benchCharacteristicCode, benchProductCode, type BenchDataset } from './dataset.js';
 import { clientToken, type BenchContext } from './harness.js';
-import { round, runPool } from './stats.js';
+import { inControlValues, round, runPool } from './stats.js';
 import { connectStands, httpRequest } from './http-client.js';
 
 const runsPerRound = 1000;
 const concurrentStations = 16;
 const judged = [0, 1, 2, 3].map(benchCharacteristicCode);
 const benchQuality: SessionUser = { id: 0, subject: 'bench-quality', name: 'Benchmark (quality)', email: 'bench-quality@plant.example', role: 'quality' };
-
-/** In-control values around the bench nominal (sum of three uniforms), so signals stay rare as on a real line. */
-function valueSource(seed: number) {
-  let s = seed >>> 0;
-  const uniform = () => { s = (Math.imul(s, 1664525) + 1013904223) >>> 0; return s / 4294967296; };
-  return () => Math.round((100 + (uniform() + uniform() + uniform() - 1.5) * 4) * 1000) / 1000;
-}
 
 /** Individuals limits from the first 30 days of each judged characteristic, frozen (audited) by the service. */
 async function freezeJudgedLimits(ctx: BenchContext, dataset: BenchDataset): Promise<void> {
@@ -56,7 +49,7 @@ export async function benchIngestWithRules(ctx: BenchContext, dataset: BenchData
   const token = await clientToken(ctx.idpUrl, 'demo-station', 'demo-station-secret', 'test-runs:write');
   ctx.log('spc ingest: freezing individuals limits for C01–C04…');
   await freezeJudgedLimits(ctx, dataset);
-  const next = valueSource(11);
+  const next = inControlValues(11);
   const base = Date.now() - 1_800_000;
   const round_ = async (prefix: string) => {
     const stands = await connectStands(ctx.app.url, concurrentStations);

@@ -52,3 +52,15 @@ export function machineBusyCpuMs(): number {
   const ticksPerSecond = 100; // USER_HZ on Linux
   return ((user + nice + system + irq + softirq + steal) / ticksPerSecond) * 1000;
 }
+
+/**
+ * In-control values around the bench nominal (100 ± 6, a sum of three uniforms as the data set's),
+ * seeded. Every benchmark that posts or stores runs uses them, so the stored series stay what a
+ * line in control produces: a constant value would shrink the moving ranges that later control
+ * limits are computed from, and the SPC rules would then fire on ordinary data.
+ */
+export function inControlValues(seed: number) {
+  let s = seed >>> 0;
+  const uniform = () => { s = (Math.imul(s, 1664525) + 1013904223) >>> 0; return s / 4294967296; };
+  return () => Math.round((100 + (uniform() + uniform() + uniform() - 1.5) * 4) * 1000) / 1000;
+}
