@@ -5,7 +5,7 @@ import { clientToken, type BenchContext } from './harness.js';
 import { inControlValues, machineBusyCpuMs, percentile, round, runPool } from './stats.js';
 import { connectStands, httpRequest } from './http-client.js';
 
-const runsPerMeasurement = 2000;
+const runsPerMeasurement = 4000;
 const concurrentStations = 16;
 const rounds = 4;
 
@@ -67,7 +67,7 @@ export async function benchIngest(ctx: BenchContext, dataset: BenchDataset, tag:
 
   // An uncounted warm-up round first, so the figure is the steady state, not JIT and cold caches.
   ctx.log('ingest: warm-up round…');
-  await runPool(300, concurrentStations, (i, lane) => post(i, `${tag}2`, lane));
+  await runPool(1000, concurrentStations, (i, lane) => post(i, `${tag}2`, lane));
   const motorIds = (await ctx.db('motors').where({ lot_id: lot.id }).select('id').limit(runsPerMeasurement)).map((m) => m.id);
   const maxAttempt = await ctx.db('test_runs').where({ lot_id: lot.id }).max({ n: 'attempt' }).first();
   const attemptBase = Number(maxAttempt?.n ?? 0) + 1;

@@ -130,27 +130,17 @@ class RunWriter {
 }
 
 /**
- * After a batch had to be written again in a knex transaction (a signal opened), the next batches
- * of the pool go there at once for this long: signals come in bursts (a drifting lot), and each
- * rolled-back attempt would cost the batch twice.
- */
-const knexAfterSignalMs = 2000;
-const knexUntilMs = new WeakMap<Knex, number>();
-
-/**
  * Runs in one transaction: driven by hand on a multi-statement pool (the usual case), or as a knex
  * transaction (a savepoint inside a caller's) when a run needs one (a calibration hold, an SPC
  * signal opening) or the pool takes one statement at a time.
  */
 async function storeInOneTransaction(db: Knex, runs: RunToStore[]): Promise<TestRunResponse[]> {
-  const direct = !db.isTransaction && acceptsSeveralStatements(db) && runs.every(calibrationOkFor)
-    && performance.now() >= (knexUntilMs.get(db) ?? 0);
-  if (direct) {
+  if (!db.isTransaction && acceptsSeveralStatements(db) && runs.every(calibrationOkFor)) {
     try {
       return await directTransaction(db, (send) => storeRuns({ db, trx: null, send }, runs));
     } catch (error) {
+      // A signal opens: foreseen after the first round trip (rolled back at once), or met later.
       if (!(error instanceof TransactionNeeded)) throw error;
-      knexUntilMs.set(db, performance.now() + knexAfterSignalMs);
     }
   }
   return db.transaction((trx) => storeRuns(transactionChannel(trx), runs));

@@ -4,7 +4,7 @@ import type { ResultInput, TestRunDocument, TestRunResponse } from '../../schema
 import { motorsForRunsStatement, pointMotorsAtRunsStatement } from '../motors/refresh-motor-status.js';
 import { runStatements, TransactionNeeded, type Statement } from '../../db/statements.js';
 import { placeHold } from '../holds/place-hold.js';
-import { spcStateLockStatement, spcStatementsAfterIngest, type SpcStateRow } from '../spc/evaluate-after-ingest.js';
+import { signalWouldOpen, spcStateLockStatement, spcStateReadStatement, spcStatementsAfterIngest, type IngestedRun, type SpcStateRow } from '../spc/evaluate-after-ingest.js';
 import { yieldStatementsAfterIngest } from '../yield/update-yield-rollups.js';
 import { shiftCalendarFromRows, shiftCalendarStatement } from '../yield/shift-calendar.js';
 import { approvedRevisionsStatement, rememberRevisionRows, type LimitSetInForce } from './limits-in-force.js';
@@ -61,14 +61,17 @@ export async function storeRuns(channel: BatchChannel, runs: RunToStore[]): Prom
   if (holds.length > 0 && !trx) throw new TransactionNeeded('a calibration hold is placed');
   const bySerial = [...runs].sort((a, b) => (a.document.serial < b.document.serial ? -1 : a.document.serial > b.document.serial ? 1 : 0));
   const productIds = [...new Set(runs.map((run) => run.product.id))];
-  const [revisionRows, calendarRows, motorRows] = await send([
+  const characteristicIds = [...new Set(runs.flatMap((run) => run.judged.results.map((r) => r.characteristicId)))].sort((a, b) => a - b);
+  const [revisionRows, calendarRows, motorRows, spcSnapshot] = await send([
     approvedRevisionsStatement(db, productIds),
     shiftCalendarStatement,
     motorsForRunsStatement(bySerial.map((run) => ({
       serial: run.document.serial, productId: run.product.id, lotId: run.lotId, stationId: run.station.id,
       finishedAt: new Date(run.document.finishedAt), receivedAt: run.receivedAt, verdict: run.judged.verdict,
     }))),
-  ]) as [Parameters<typeof rememberRevisionRows>[1], Parameters<typeof shiftCalendarFromRows>[0], LockedMotor[]];
+    // Without a knex transaction a signal cannot open: read the states now to foresee one.
+    ...(trx ? [] : [spcStateReadStatement(db, characteristicIds)]),
+  ]) as [Parameters<typeof rememberRevisionRows>[1], Parameters<typeof shiftCalendarFromRows>[0], LockedMotor[], SpcStateRow[] | undefined];
   const motors = checkedMotors(runs, motorRows);
   await confirmLimitsInForce(db, runs, rememberRevisionRows(productIds, revisionRows));
 
@@ -81,15 +84,13 @@ export async function storeRuns(channel: BatchChannel, runs: RunToStore[]): Prom
     };
     return { run, motorId: motor.id, attempt: motor.attempts, calibrationOk, response, runId: 0 };
   });
-  const characteristicIds = [...new Set(runs.flatMap((run) => run.judged.results.map((r) => r.characteristicId)))].sort((a, b) => a - b);
+  // The runs will be numbered in this order; a signal foreseen goes to a knex transaction before anything is written.
+  if (spcSnapshot && signalWouldOpen(stored.map((s, i) => ingestedRun(s, i + 1)), spcSnapshot)) throw new TransactionNeeded('an SPC signal opens');
   const [runRows, stateRows] = await send([insertRunsStatement(stored), spcStateLockStatement(db, characteristicIds)]) as [Array<{ id: number | string; run_uuid: string }>, SpcStateRow[]];
   const runIds = new Map(runRows.map((row) => [row.run_uuid, Number(row.id)]));
   for (const s of stored) s.runId = runIds.get(s.run.document.runId) as number;
 
-  const spc = await spcStatementsAfterIngest(db, trx, stored.map((s) => ({
-    runId: s.runId, motorId: s.motorId, lotId: s.run.lotId, productId: s.run.product.id, startedAt: s.run.document.startedAt,
-    receivedAt: s.run.receivedAt, measurements: s.run.judged.results,
-  })), stateRows);
+  const spc = await spcStatementsAfterIngest(db, trx, stored.map((s) => ingestedRun(s, s.runId)), stateRows);
   const yieldRollups = yieldStatementsAfterIngest(db, stored.map((s) => ({
     motorId: s.motorId, runId: s.runId, attempt: s.attempt, startedAt: new Date(s.run.document.startedAt), verdict: s.run.judged.verdict,
     productId: s.run.product.id, lotId: s.run.lotId, station: s.run.station,
@@ -104,6 +105,14 @@ export async function storeRuns(channel: BatchChannel, runs: RunToStore[]): Prom
   ], { last: holds.length === 0 });
   if (trx) for (const run of holds) await holdForCalibration(trx, run);
   return stored.map((s) => s.response);
+}
+
+/** A stored run as the SPC evaluation sees it, under the given run id. */
+function ingestedRun(s: StoredRun, runId: number): IngestedRun {
+  return {
+    runId, motorId: s.motorId, lotId: s.run.lotId, productId: s.run.product.id, startedAt: s.run.document.startedAt,
+    receivedAt: s.run.receivedAt, measurements: s.run.judged.results,
+  };
 }
 
 /** Every run's motor row, as the batch found or made it: of the run's product and lot. */

@@ -15,6 +15,15 @@ export type IngestedRun = {
 
 export type SpcStateRow = { characteristic_id: number; control_limit_id: number; state_json: string | SpcStateData };
 
+/** The SPC state rows of these characteristics that judge values (SPC on, limits frozen), in key order. */
+function spcStateQuery(db: Knex, characteristicIds: readonly number[]) {
+  return db('spc_state')
+    .whereIn('characteristic_id', characteristicIds.length > 0 ? characteristicIds : [0])
+    .whereExists((q) => q.select(db.raw('1')).from('characteristics').whereRaw('characteristics.id = spc_state.characteristic_id').andWhere('spc_enabled', true))
+    .orderBy('characteristic_id')
+    .select('characteristic_id', 'control_limit_id', 'state_json');
+}
+
 /**
  * The locking read of the SPC state of these characteristics, in key order so that concurrent
  * ingests queue instead of deadlocking. Characteristics without frozen limits (or with SPC off)
@@ -22,13 +31,41 @@ export type SpcStateRow = { characteristic_id: number; control_limit_id: number;
  * consistently, only spc_state is locked.
  */
 export function spcStateLockStatement(db: Knex, characteristicIds: readonly number[]): Statement {
-  return db('spc_state')
-    .whereIn('characteristic_id', characteristicIds.length > 0 ? characteristicIds : [0])
-    .whereExists((q) => q.select(db.raw('1')).from('characteristics').whereRaw('characteristics.id = spc_state.characteristic_id').andWhere('spc_enabled', true))
-    .orderBy('characteristic_id')
-    .forUpdate()
-    .select('characteristic_id', 'control_limit_id', 'state_json')
-    .toSQL();
+  return spcStateQuery(db, characteristicIds).forUpdate().toSQL();
+}
+
+/** The same rows read without a lock, to foresee whether a batch opens a signal (signalWouldOpen). */
+export function spcStateReadStatement(db: Knex, characteristicIds: readonly number[]): Statement {
+  return spcStateQuery(db, characteristicIds).toSQL();
+}
+
+/**
+ * Whether judging these runs, in run order, from these states would open a signal (a rule broken
+ * with no episode of it going on). Writes nothing: the ingest writer asks it with the states as read
+ * at the start of a batch, to choose a transaction that can open signals before it writes anything.
+ */
+export function signalWouldOpen(runs: readonly IngestedRun[], stateRows: readonly SpcStateRow[]): boolean {
+  const inRunOrder = [...runs].sort((a, b) => a.runId - b.runId);
+  for (const row of stateRows) {
+    let state = structuredClone(jsonColumn<SpcStateData>(row.state_json));
+    for (const run of inRunOrder) {
+      const measured = run.measurements.find((m) => m.characteristicId === row.characteristic_id);
+      if (!measured) continue;
+      const step = phaseTwoStep(state, { runId: run.runId, lotId: run.lotId, value: measured.value });
+      if (!step.judged) {
+        state = step.state;
+        continue;
+      }
+      const episodes: Partial<Record<SignalRule, number>> = {};
+      for (const broken of step.judged.broken) {
+        const ongoing = state.episodes[broken.rule];
+        if (ongoing === undefined) return true;
+        episodes[broken.rule] = ongoing;
+      }
+      state = { ...step.state, episodes };
+    }
+  }
+  return false;
 }
 
 /**
