@@ -16,10 +16,10 @@ import type { SheetShape } from './workbook/pack-workbook.js';
 export const packsFolder = 'evidence-packs';
 
 /**
- * Results pages the zip thread may read ahead of the workbook (500 runs, about 300 kB each): room
- * to go on with the CSV while the Motors sheet is written, and a bound on what waits in memory.
+ * Results pages the zip thread may send ahead of the workbook (500 runs, about 300 kB each): room
+ * to go on with the CSV while a page is written, and a bound on what waits in memory.
  */
-const pagesAhead = 16;
+const pagesAhead = 4;
 
 export type BuildOptions = {
   dataDir: string;

@@ -6,6 +6,12 @@ import type { FromZipWorker, PackZipInput, ToZipWorker } from './pack-zip-protoc
 
 // Plain JavaScript that registers tsx in the worker thread, then loads pack-zip-worker.ts.
 const workerFile = new URL('./pack-zip-worker-start.mjs', import.meta.url);
+/**
+ * The worker's heap, kept small so the pack stays within its memory budget (400 MB for the whole
+ * process): what it holds at once is a few pages of runs (about 5 MB each) and its modules, and
+ * without a limit V8 lets garbage grow to well over 100 MB before collecting it.
+ */
+const workerHeap = { maxOldGenerationSizeMb: 96, maxYoungGenerationSizeMb: 16 };
 /** How long an aborting worker may take to close its file before it is simply ended. */
 const abortWaitMs = 5000;
 
@@ -24,7 +30,7 @@ export class PackZipThread {
   private readonly exited: Promise<void>;
 
   constructor(input: PackZipInput) {
-    this.worker = new Worker(workerFile, { workerData: input });
+    this.worker = new Worker(workerFile, { workerData: input, resourceLimits: workerHeap });
     this.worker.on('message', (message: FromZipWorker) => {
       this.inbox.push(message);
       this.arrived?.();
