@@ -17,9 +17,10 @@ export const packsFolder = 'evidence-packs';
 
 /**
  * Results pages the zip thread may send ahead of the workbook (500 runs, about 300 kB each): room
- * to go on with the CSV while a page is written, and a bound on what waits in memory.
+ * to go on with the CSV while the Motors sheet is written, when the second core has time to
+ * spare, and a bound (about 7 MB) on what waits in memory.
  */
-const pagesAhead = 4;
+const pagesAhead = 24;
 
 export type BuildOptions = {
   dataDir: string;
