@@ -11,7 +11,7 @@ const workerFile = new URL('./pack-zip-worker-start.mjs', import.meta.url);
  * process): what it holds at once is a few pages of runs (about 5 MB each) and its modules, and
  * without a limit V8 lets garbage grow to well over 100 MB before collecting it.
  */
-const workerHeap = { maxOldGenerationSizeMb: 96, maxYoungGenerationSizeMb: 16 };
+const workerHeap = { maxOldGenerationSizeMb: 64, maxYoungGenerationSizeMb: 16 };
 /** How long an aborting worker may take to close its file before it is simply ended. */
 const abortWaitMs = 5000;
 
