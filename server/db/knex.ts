@@ -24,7 +24,6 @@ function knexOptions(db: Config['db'], options: { multipleStatements: boolean; p
 }
 
 const statementPools = new WeakMap<Knex, () => Knex>();
-const settingsOf = new WeakMap<Knex, Config['db']>();
 
 /**
  * One knex pool for the process. DATETIME values are read and written as UTC. Beside it, created on
@@ -34,7 +33,6 @@ const settingsOf = new WeakMap<Knex, Config['db']>();
  */
 export function createDb(db: Config['db']): Knex {
   const knex = knexFactory(knexOptions(db, { multipleStatements: false, poolMax: db.poolMax }));
-  settingsOf.set(knex, db);
   let statements: Knex | undefined;
   statementPools.set(knex, () => (statements ??= knexFactory(knexOptions(db, { multipleStatements: true, poolMax: 4 }))));
   // Closing the app's pool closes this one too (knex defines destroy as a configurable property).
@@ -52,11 +50,4 @@ export function createDb(db: Config['db']): Knex {
 /** The multi-statement pool beside a pool made by createDb (undefined for any other knex). */
 export function statementPool(db: Knex): Knex | undefined {
   return statementPools.get(db)?.();
-}
-
-/** The settings a pool made by createDb was made with, so a worker thread can open its own pool to the same database. */
-export function dbSettings(db: Knex): Config['db'] {
-  const settings = settingsOf.get(db);
-  if (!settings) throw new Error('dbSettings: this pool was not made by createDb');
-  return settings;
 }

@@ -6,21 +6,17 @@ import type { PackFilter } from './pack-filter.js';
 import { countPack, packProducts, type PackTotals } from './pack-scope.js';
 import { writePackContents } from './write-pack-contents.js';
 import { buildManifest, manifestName, type PackedFile } from './pack-manifest.js';
-import { PackZipThread } from './pack-zip-thread.js';
-import { productPlans } from './workbook/results-sheets.js';
-import { dbSettings } from '../../db/knex.js';
+import { ZipFile } from './zip-file.js';
 import { sheetRowLimit } from './workbook/rolling-sheet.js';
 import type { PackOrigin } from './workbook/pack-context.js';
 import type { SheetShape } from './workbook/pack-workbook.js';
 
 export const packsFolder = 'evidence-packs';
 
-/**
- * Results pages the zip thread may send ahead of the workbook (500 runs, about 300 kB each): room
- * to go on with the CSV while the workbook's thread is busy elsewhere, and a bound (about 2.4 MB)
- * on what waits in memory. At 24 the benchmark's peak came to 397 MB of the 400 allowed.
- */
-const pagesAhead = 8;
+// The CSV is deflated as it is written, on zlib's thread pool beside the JavaScript that makes
+// the rows. Level 1: the benchmark's 478 MB CSV became 31.4 MB in 1.4 s of CPU (level 3: 30.8 MB
+// in 1.7 s).
+const csvDeflateLevel = 1;
 
 export type BuildOptions = {
   dataDir: string;
@@ -38,18 +34,17 @@ export type BuiltPack = {
 
 /**
  * Builds one evidence pack: a zip of the workbook, the long CSV and a manifest hashing both.
- * A worker thread (PackZipThread) reads the runs and streams the CSV straight into the zip while
- * this thread writes the workbook beside it from the same read; the workbook is then stored in
- * the zip as it is, and the manifest added. Every file is hashed as it is written. Work happens in
- * a private folder and the zip is moved into place only when whole, so a stopped build leaves
- * nothing behind.
+ * The CSV streams straight into the zip while the workbook is written beside it (the database
+ * is read once for both); the workbook is then stored in the zip as it is, and the manifest
+ * added. Every file is hashed as it is written. Work happens in a private folder and the zip
+ * is moved into place only when whole, so a stopped build leaves nothing behind.
  */
 export async function buildEvidencePack(db: Knex, filter: PackFilter, origin: PackOrigin, options: BuildOptions): Promise<BuiltPack> {
   const root = join(options.dataDir, packsFolder);
   await mkdir(root, { recursive: true });
   const work = await mkdtemp(join(root, `work-${origin.packId}-`));
   const zipPath = join(work, 'pack.zip');
-  let zip: PackZipThread | undefined;
+  const pack = new ZipFile(zipPath, csvDeflateLevel);
   try {
     // Counting takes a while on a large pack: it runs beside the Results pass (see
     // writePackContents), and progress is reported once there is a total to report against.
@@ -70,25 +65,22 @@ export async function buildEvidencePack(db: Knex, filter: PackFilter, origin: Pa
     const csvName = `fluxtrail-pack-${origin.packId}-measurements.csv`;
     const xlsxName = `fluxtrail-pack-${origin.packId}-workbook.xlsx`;
     const xlsxPath = join(work, xlsxName);
-    const plans = await productPlans(db, await packProducts(db, filter));
-    zip = new PackZipThread({
-      db: dbSettings(db), filter, zipPath, csvName, pagesAhead,
-      products: plans.map((p) => ({ id: p.product.id, characteristicIds: p.characteristics.map((c) => c.id) })),
-    });
     const written = await writePackContents({
-      db, filter, plans, count, origin, rowCap: options.sheetRowCap ?? sheetRowLimit, advance, workbookPath: xlsxPath, zip, csvName,
+      db, filter, products: await packProducts(db, filter), count, origin, rowCap: options.sheetRowCap ?? sheetRowLimit, advance,
+      workbookPath: xlsxPath, csv: { name: csvName, entry: pack.openEntry(csvName) },
     });
     const files: PackedFile[] = [
       { name: xlsxName, bytes: written.workbook.bytes, sha256: written.workbook.sha256 },
       { name: csvName, bytes: written.csv.bytes, sha256: written.csv.sha256 },
     ];
-    const manifest = `${JSON.stringify(buildManifest(origin, filter, await count(), written.csv.rows, files), null, 2)}\n`;
-    const packed = await zip.finish({ path: xlsxPath, name: xlsxName }, { name: manifestName, text: manifest });
+    pack.addFile(xlsxPath, xlsxName, { store: true });
+    pack.addText(manifestName, `${JSON.stringify(buildManifest(origin, filter, await count(), written.csv.rows, files), null, 2)}\n`);
+    const zip = await pack.finish();
     const fileKey = `${packsFolder}/evidence-pack-${origin.packId}-${randomBytes(6).toString('hex')}.zip`;
     await rename(zipPath, join(options.dataDir, fileKey));
-    return { fileKey, sizeBytes: packed.bytes, sha256: packed.sha256, rows: rowsDone, csvRows: written.csv.rows, sheets: written.sheets };
+    return { fileKey, sizeBytes: zip.bytes, sha256: zip.sha256, rows: rowsDone, csvRows: written.csv.rows, sheets: written.sheets };
   } catch (error) {
-    await zip?.abort();
+    await pack.abort();
     throw error;
   } finally {
     await rm(work, { recursive: true, force: true });

@@ -1,21 +1,10 @@
-import type { Knex } from 'knex';
-import type { ResultsPage } from '../results-page.js';
+import { eachRunPage, type PackRun } from '../read-pack-runs.js';
+import type { PackCsv } from '../pack-csv.js';
 import { RollingSheet, formats, type CellValue, type ColumnSpec } from './rolling-sheet.js';
 import type { PassContext } from './pack-context.js';
 import type { PackProduct } from '../pack-scope.js';
 
 type Characteristic = { id: number; code: string; unit: string };
-
-/** A product and its characteristics in test-plan order: one Results column pair each. */
-export type ProductPlan = { product: PackProduct; characteristics: Characteristic[] };
-
-export async function productPlans(db: Knex, products: readonly PackProduct[]): Promise<ProductPlan[]> {
-  return Promise.all(products.map(async (product) => {
-    const rows = (await db('characteristics').where({ product_id: product.id })
-      .orderBy([{ column: 'sort_order' }, { column: 'id' }]).select('id', 'code', 'unit')) as Characteristic[];
-    return { product, characteristics: rows.map((c) => ({ id: Number(c.id), code: c.code, unit: c.unit })) };
-  }));
-}
 
 const runColumns: ColumnSpec[] = [
   { header: 'Serial', width: 20 }, { header: 'Run', width: 38 }, { header: 'Attempt', numFmt: formats.integer },
@@ -25,28 +14,32 @@ const runColumns: ColumnSpec[] = [
   { header: 'Verdict', width: 9 },
 ];
 
-/** Each run's row: its facts, then a value and verdict pair per characteristic of the product (empty when not measured). */
-function writePage(sheet: RollingSheet, page: ResultsPage, width: number): void {
-  page.runs.forEach((run, r) => {
-    const row: CellValue[] = [run.serial, run.uuid, run.attempt, run.startedAt, run.station, run.calibrationDue,
-      run.operatorBadge, run.programVersion, run.limitRevision, run.verdict];
-    for (let c = r * width, end = c + width; c < end; c++) {
-      const code = page.verdicts[c];
-      if (code === 0) row.push(null, null);
-      else row.push(page.values[c], page.verdictNames[code]);
-    }
-    sheet.addRow(row);
-  });
+/** A run's row: its facts, then a value and verdict pair per characteristic of the product (empty when not measured). */
+function resultsRow(run: PackRun, column: ReadonlyMap<number, number>, characteristicCount: number): CellValue[] {
+  const row: CellValue[] = [run.serial, run.uuid, run.attempt, run.startedAt, run.station, run.calibrationDue,
+    run.operatorBadge, run.programVersion, run.limitRevision, run.verdict];
+  const first = row.length;
+  row.length = first + characteristicCount * 2;
+  row.fill(null, first);
+  for (const m of run.measurements) {
+    const index = column.get(m[1]);
+    if (index === undefined) continue;
+    row[first + index * 2] = m[2];
+    row[first + index * 2 + 1] = m[5];
+  }
+  return row;
 }
 
 /**
  * One sheet per product (continued on numbered sheets when long): a row per run, a column pair
- * per characteristic. The pages come from the read that also writes the CSV (PackZipThread), so
- * the database is read once; the CSV's lines therefore come product by product (in code order),
- * each product's runs by id.
+ * per characteristic. The same read of the runs writes the CSV, so the database is read once;
+ * the CSV's lines therefore come product by product (in code order), each product's runs by id.
  */
-export async function writeResultsSheets(ctx: PassContext, plans: readonly ProductPlan[], pages: () => AsyncIterable<ResultsPage>): Promise<void> {
-  for (const { product, characteristics } of plans) {
+export async function writeResultsSheets(ctx: PassContext, csv: PackCsv, products: readonly PackProduct[]): Promise<void> {
+  for (const product of products) {
+    const characteristics = (await ctx.db('characteristics').where({ product_id: product.id })
+      .orderBy([{ column: 'sort_order' }, { column: 'id' }]).select('id', 'code', 'unit')) as Characteristic[];
+    const column = new Map(characteristics.map((c, index) => [Number(c.id), index]));
     const sheet = new RollingSheet(ctx.workbook, `Results ${product.code}`, [
       ...runColumns,
       ...characteristics.flatMap((c): ColumnSpec[] => [
@@ -54,11 +47,16 @@ export async function writeResultsSheets(ctx: PassContext, plans: readonly Produ
         { header: `${c.code} verdict` },
       ]),
     ], ctx.rowCap);
-    for await (const page of pages()) {
-      writePage(sheet, page, characteristics.length);
-      await sheet.settle();
-      await ctx.advance(page.runs.length + page.measurements);
-    }
+    await eachRunPage(ctx.db, ctx.filter, { productId: product.id }, async (runs) => {
+      let measurements = 0;
+      for (const run of runs) {
+        sheet.addRow(resultsRow(run, column, characteristics.length));
+        csv.addRun(run);
+        measurements += run.measurements.length;
+      }
+      await Promise.all([sheet.settle(), csv.settle()]);
+      await ctx.advance(runs.length + measurements);
+    });
     sheet.commit();
   }
 }
