@@ -25,6 +25,7 @@ export function sheetName(base: string, part: number): string {
 
 type Style = Readonly<Partial<ExcelJS.Style>>;
 const dateTimeStyle: Style = Object.freeze({ numFmt: formats.dateTime });
+const rowStyle: Style = Object.freeze({});
 
 /**
  * How a sheet's columns look and how a row is written into it. exceljs gives every new cell a
@@ -56,17 +57,24 @@ export class SheetColumns {
     return { name, headers: this.specs.map((c) => c.header), rows: 1, samples: this.specs.map(() => null), filled: this.specs.map(() => 0) };
   }
 
-  /** Writes a row, noting in `shape` what it held. */
-  writeRow(sheet: ExcelJS.Worksheet, values: readonly CellValue[], shape: SheetShape): void {
-    // exceljs reads an array whose first element is undefined as sparse; null keeps columns aligned.
-    const row = sheet.addRow(values.map((v) => (typeof v === 'string' ? sheetText(v) : v ?? null)));
+  /** Writes a row, noting in `shape` what it held. `values` is the caller's own array: it is changed as it is written. */
+  writeRow(sheet: ExcelJS.Worksheet, values: CellValue[], shape: SheetShape): void {
     for (let i = 0; i < values.length; i++) {
       const value = values[i];
-      row.getCell(i + 1).style = value instanceof Date && !this.specs[i].numFmt ? dateTimeStyle : this.styles[i];
-      if (value !== null && value !== undefined) {
-        if (shape.filled[i] === 0) shape.samples[i] = value;
-        shape.filled[i] += 1;
+      if (value === null || value === undefined) {
+        // exceljs reads an array whose first element is undefined as sparse; null keeps columns aligned.
+        values[i] = null;
+        continue;
       }
+      if (typeof value === 'string') values[i] = sheetText(value);
+      if (shape.filled[i] === 0) shape.samples[i] = value;
+      shape.filled[i] += 1;
+    }
+    const row = sheet.addRow(values);
+    // Shared like the cells' styles: a row's own new style object would be serialised once per row.
+    (row as unknown as { style: Style }).style = rowStyle;
+    for (let i = 0; i < values.length; i++) {
+      row.getCell(i + 1).style = values[i] instanceof Date && !this.specs[i].numFmt ? dateTimeStyle : this.styles[i];
     }
     row.commit();
     shape.rows += 1;
@@ -103,7 +111,8 @@ export class RollingSheet {
     this.layout.writeHeader(this.sheet);
   }
 
-  addRow(values: readonly CellValue[]): void {
+  /** `values` is the caller's own array: it is changed as it is written. */
+  addRow(values: CellValue[]): void {
     if (this.shape.rows >= this.rowCap) {
       this.sheet.commit();
       this.open();
