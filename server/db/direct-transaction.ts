@@ -3,8 +3,16 @@ import type { Statement } from './statements.js';
 
 type Connection = { query(sql: string, values: unknown[], callback: (error: Error | null, results: unknown) => void): void };
 
+/** An undefined binding would be written as NULL by the driver; knex refuses it, and so do we. */
+function assertBound(statements: readonly Statement[]): void {
+  for (const statement of statements) {
+    if (statement.bindings.some((binding) => binding === undefined)) throw new Error(`undefined binding in: ${statement.sql.slice(0, 120)}`);
+  }
+}
+
 /** Sends statements to a raw connection of a multi-statement pool; resolves with each one's result. */
 function query(connection: Connection, statements: readonly Statement[]): Promise<unknown[]> {
+  assertBound(statements);
   return new Promise((resolve, reject) => {
     connection.query(statements.map((s) => s.sql).join(';\n'), statements.flatMap((s) => s.bindings), (error, results) => {
       if (error) reject(error);
