@@ -17,10 +17,12 @@ import { createPlant, createProduct, createStation, nextSerial, runDocument, typ
 // on ingest (motor status, yield counters, SPC state, chart blocks), is exactly what storing the
 // runs one by one would have left.
 
-async function commits(db: Knex): Promise<number> {
-  const [rows] = await db.raw("SHOW GLOBAL STATUS LIKE 'Com_commit'");
+async function statusCount(db: Knex, name: 'Com_commit' | 'Com_rollback'): Promise<number> {
+  const [rows] = await db.raw('SHOW GLOBAL STATUS LIKE ?', [name]);
   return Number((rows as Array<{ Value: string }>)[0].Value);
 }
+
+const commits = (db: Knex) => statusCount(db, 'Com_commit');
 
 function withValue(plant: PlantFixture, code: string, value: number, overrides: Parameters<typeof runDocument>[1] = {}) {
   const document = runDocument(plant, overrides);
@@ -185,30 +187,62 @@ describe('ingest of runs posted at the same time', () => {
     expect(Number(audited?.n)).toBe(overdueSerials.length);
   });
 
-  it('when a signal opens inside a batch, then the batch is stored whole once and the signal opened once, audited', async () => {
+  it('when signals open inside batches, then every run is stored once and each episode opens one signal, audited', async () => {
     const quality = (await signIn(server.url, 'quality')).cookie;
     const ke = plant.product.characteristics.find((c) => c.code === 'bemf.ke')!.id;
     for (let i = 0; i < 100; i++) await ingestTestRun(server.db, withValue(plant, 'bemf.ke', i % 2 === 0 ? 49.9 : 50.1));
     const post = (path: string) => request(server.url).post(path).set('cookie', quality).set('x-fluxtrail-csrf', '1');
     const trial = await post(`/api/v1/spc/characteristics/${ke}/trial-limits`).send({ chartKind: 'ewma' }).expect(201);
     await post(`/api/v1/spc/control-limits/${trial.body.id}/freeze`).send({}).expect(200);
+    const frozen = jsonColumn<SpcStateData>((await server.db('spc_state').where({ characteristic_id: ke }).first('state_json')).state_json);
+    const lastBaselineRun = Number((await server.db('test_runs').max({ id: 'id' }).first())?.id);
 
-    // One in control (it goes alone: the writer was idle), then 19 far above the control limits,
-    // written together: the first of them opens a signal, the rest continue its episode.
-    const documents = Array.from({ length: 20 }, (_, i) => withValue(plant, 'bemf.ke', i === 0 ? 50 : 51.5));
-    const outcomes = await Promise.all(documents.map((d) => ingestTestRun(server.db, d)));
+    // Hold the writer busy: a run in control waits on the SPC state row, locked here, while
+    // twenty more queue behind it; on release they are written as one batch, in which the values
+    // far above the limits open signals. The writer foresees that, rolls its own transaction
+    // back and writes the batch in a knex transaction.
+    const rollbacksBefore = await statusCount(server.db, 'Com_rollback');
+    const lock = await server.db.transaction();
+    await lock('spc_state').where({ characteristic_id: ke }).forUpdate().first();
+    const blocker = ingestTestRun(server.db, withValue(plant, 'bemf.ke', 50));
+    await new Promise((resolve) => setTimeout(resolve, 300));
+    const documents = Array.from({ length: 20 }, (_, i) => withValue(plant, 'bemf.ke', i % 7 === 0 ? 50 : 51.5));
+    const posted = Promise.all(documents.map((d) => ingestTestRun(server.db, d)));
+    await new Promise((resolve) => setTimeout(resolve, 300));
+    await lock.commit();
+    const outcomes = await posted;
+    expect((await blocker).status).toBe(201);
+    expect(await statusCount(server.db, 'Com_rollback')).toBeGreaterThan(rollbacksBefore);
 
     expect(outcomes.map((o) => o.status)).toEqual(documents.map(() => 201));
     expect(await server.db('test_runs').whereIn('run_uuid', documents.map((d) => d.runId)).count({ n: '*' })).toEqual([{ n: 20 }]);
+    // The episodes that judging the stored series in run order opens and continues, whatever the batches were.
+    const series = await server.db('measurements').join('test_runs', 'test_runs.id', 'measurements.run_id')
+      .where('measurements.characteristic_id', ke).andWhere('test_runs.id', '>', lastBaselineRun)
+      .orderBy('test_runs.id').select('test_runs.id as runId', 'test_runs.lot_id as lotId', 'measurements.value');
+    let state = freshState(frozen.limits);
+    let opened = 0;
+    let continued = 0;
+    for (const point of series) {
+      const step = phaseTwoStep(state, { runId: point.runId, lotId: point.lotId, value: point.value });
+      if (!step.judged) { state = step.state; continue; }
+      const episodes: SpcStateData['episodes'] = {};
+      for (const broken of step.judged.broken) {
+        if (state.episodes[broken.rule] === undefined) opened++;
+        else continued++;
+        episodes[broken.rule] = state.episodes[broken.rule] ?? -1;
+      }
+      state = { ...step.state, episodes };
+    }
+    expect(opened).toBeGreaterThan(0);
     const signals = await server.db('signals').where({ characteristic_id: ke }).pluck('id');
-    expect(signals).toHaveLength(1);
-    const opened = await server.db('audit_events').where({ action: 'signal.opened', entity_type: 'signal' }).pluck('entity_id');
-    expect(opened.map(Number)).toEqual(signals.map(Number));
-    // Every value was stepped through exactly once, the batch tried by hand first included.
+    expect(signals).toHaveLength(opened);
+    const audited = await server.db('audit_events').where({ action: 'signal.opened', entity_type: 'signal' }).pluck('entity_id');
+    expect(audited.map(Number).sort((a, b) => a - b)).toEqual(signals.map(Number).sort((a, b) => a - b));
+    const points = await server.db('signal_points').whereIn('signal_id', signals).count({ n: '*' }).first();
+    expect(Number(points?.n)).toBe(continued);
+    // Every value was stepped through exactly once, the batches tried by hand first included.
     const stored = jsonColumn<SpcStateData>((await server.db('spc_state').where({ characteristic_id: ke }).first('state_json')).state_json);
-    expect(stored.ewma?.t).toBe(20);
-    // The 18 values after the one that opened it continue its episode, each once.
-    const points = await server.db('signal_points').where({ signal_id: signals[0] }).count({ n: '*' }).first();
-    expect(Number(points?.n)).toBe(18);
+    expect(stored.ewma?.t).toBe(21);
   });
 });
