@@ -3,7 +3,7 @@ import type { Knex } from 'knex';
 import { openSignal } from '../signals/open-signal.js';
 import { displayBlocksStatement } from './display-blocks.js';
 import { TransactionNeeded, type Statement } from '../../db/statements.js';
-import { phaseTwoStep, type SpcStateData } from './phase-two-step.js';
+import { phaseTwoStep, type BrokenRule, type SpcStateData } from './phase-two-step.js';
 import type { SignalRule } from './chart-kinds.js';
 
 export type IngestedRun = {
@@ -47,25 +47,38 @@ export function spcStateReadStatement(db: Knex, characteristicIds: readonly numb
 export function signalWouldOpen(runs: readonly IngestedRun[], stateRows: readonly SpcStateRow[]): boolean {
   const inRunOrder = [...runs].sort((a, b) => a.runId - b.runId);
   for (const row of stateRows) {
-    let state = structuredClone(jsonColumn<SpcStateData>(row.state_json));
+    let state = jsonColumn<SpcStateData>(row.state_json);
     for (const run of inRunOrder) {
       const measured = run.measurements.find((m) => m.characteristicId === row.characteristic_id);
       if (!measured) continue;
-      const step = phaseTwoStep(state, { runId: run.runId, lotId: run.lotId, value: measured.value });
-      if (!step.judged) {
-        state = step.state;
-        continue;
-      }
-      const episodes: Partial<Record<SignalRule, number>> = {};
-      for (const broken of step.judged.broken) {
-        const ongoing = state.episodes[broken.rule];
-        if (ongoing === undefined) return true;
-        episodes[broken.rule] = ongoing;
-      }
-      state = { ...step.state, episodes };
+      const step = stepWithEpisodes(state, run, measured.value);
+      if (step.opening.length > 0) return true;
+      state = step.next;
     }
   }
   return false;
+}
+
+/**
+ * One Phase II step with its episodes: the next state, with the episodes that go on (a rule broken
+ * again at the next plotted point) kept in it, and the rules broken afresh, each of which opens a
+ * signal. The given state is left as it was.
+ */
+function stepWithEpisodes(state: SpcStateData, run: IngestedRun, value: number) {
+  const step = phaseTwoStep(state, { runId: run.runId, lotId: run.lotId, value });
+  if (!step.judged) return { next: step.state, judged: null, continued: [] as number[], opening: [] as BrokenRule[] };
+  const episodes: Partial<Record<SignalRule, number>> = {};
+  const continued: number[] = [];
+  const opening: BrokenRule[] = [];
+  for (const broken of step.judged.broken) {
+    const ongoing = state.episodes[broken.rule];
+    if (ongoing === undefined) opening.push(broken);
+    else {
+      episodes[broken.rule] = ongoing;
+      continued.push(ongoing);
+    }
+  }
+  return { next: { ...step.state, episodes }, judged: step.judged, continued, opening };
 }
 
 /**
@@ -109,26 +122,18 @@ type Episodes = { openedSignalIds: number[]; continued: Array<{ signal_id: numbe
 async function judgeOneValue(
   trx: Knex.Transaction | null, row: SpcStateRow, state: SpcStateData, run: IngestedRun, value: number, out: Episodes,
 ): Promise<SpcStateData> {
-  const step = phaseTwoStep(state, { runId: run.runId, lotId: run.lotId, value });
-  const next = step.state;
-  if (!step.judged) return next;
-  const episodes: Partial<Record<SignalRule, number>> = {};
-  for (const broken of step.judged.broken) {
-    const ongoing = state.episodes[broken.rule];
-    if (ongoing !== undefined) {
-      episodes[broken.rule] = ongoing;
-      out.continued.push({ signal_id: ongoing, run_id: run.runId });
-      continue;
-    }
-    // Opening a signal writes the audit chain, which reads as it goes: that needs a knex transaction.
-    if (!trx) throw new TransactionNeeded('an SPC signal opens');
+  const { next, judged, continued, opening } = stepWithEpisodes(state, run, value);
+  for (const signalId of continued) out.continued.push({ signal_id: signalId, run_id: run.runId });
+  if (!judged || opening.length === 0) return next;
+  // Opening a signal writes the audit chain, which reads as it goes: that needs a knex transaction.
+  if (!trx) throw new TransactionNeeded('an SPC signal opens');
+  for (const broken of opening) {
     const signal = await openSignal(trx, {
       characteristicId: row.characteristic_id, productId: run.productId, controlLimitId: row.control_limit_id, rule: broken.rule,
-      lotId: step.judged.lotId, firstRunId: step.judged.firstRunId, patternFirstRunId: broken.patternFirstRunId, at: run.receivedAt,
+      lotId: judged.lotId, firstRunId: judged.firstRunId, patternFirstRunId: broken.patternFirstRunId, at: run.receivedAt,
     });
-    episodes[broken.rule] = signal.id;
+    next.episodes[broken.rule] = signal.id;
     if (signal.created) out.openedSignalIds.push(signal.id);
   }
-  next.episodes = episodes;
   return next;
 }
