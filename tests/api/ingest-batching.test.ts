@@ -41,6 +41,26 @@ describe('ingest of runs posted at the same time', () => {
     plant = await createPlant(server.db);
   });
 
+  /** 100 runs in control, EWMA trial limits of bemf.ke from them, frozen by quality: the state to judge from. */
+  async function frozenEwmaOfKe() {
+    const quality = (await signIn(server.url, 'quality')).cookie;
+    const ke = plant.product.characteristics.find((c) => c.code === 'bemf.ke')!.id;
+    for (let i = 0; i < 100; i++) await ingestTestRun(server.db, withValue(plant, 'bemf.ke', i % 2 === 0 ? 49.9 : 50.1));
+    const post = (path: string) => request(server.url).post(path).set('cookie', quality).set('x-fluxtrail-csrf', '1');
+    const trial = await post(`/api/v1/spc/characteristics/${ke}/trial-limits`).send({ chartKind: 'ewma' }).expect(201);
+    await post(`/api/v1/spc/control-limits/${trial.body.id}/freeze`).send({}).expect(200);
+    const frozen = jsonColumn<SpcStateData>((await server.db('spc_state').where({ characteristic_id: ke }).first('state_json')).state_json);
+    const lastBaselineRun = Number((await server.db('test_runs').max({ id: 'id' }).first())?.id);
+    return { ke, frozen, lastBaselineRun };
+  }
+
+  /** The characteristic's stored values after a run, in run order. */
+  function seriesAfter(characteristicId: number, runId: number): Promise<Array<{ runId: number; lotId: number; value: number }>> {
+    return server.db('measurements').join('test_runs', 'test_runs.id', 'measurements.run_id')
+      .where('measurements.characteristic_id', characteristicId).andWhere('test_runs.id', '>', runId)
+      .orderBy('test_runs.id').select('test_runs.id as runId', 'test_runs.lot_id as lotId', 'measurements.value');
+  }
+
   it('when 24 stands post at once, then every run is stored once, in a few shared transactions, and the rollups add up', async () => {
     // Every third run fails bemf.ke (USL 52).
     const documents = Array.from({ length: 24 }, (_, i) => withValue(plant, 'bemf.ke', i % 3 === 0 ? 53 : 50.3));
@@ -143,22 +163,13 @@ describe('ingest of runs posted at the same time', () => {
   });
 
   it('when runs judged against frozen limits arrive together, then the SPC state equals one built run by run in run order', async () => {
-    const quality = (await signIn(server.url, 'quality')).cookie;
-    const ke = plant.product.characteristics.find((c) => c.code === 'bemf.ke')!.id;
-    for (let i = 0; i < 100; i++) await ingestTestRun(server.db, withValue(plant, 'bemf.ke', i % 2 === 0 ? 49.9 : 50.1));
-    const post = (path: string) => request(server.url).post(path).set('cookie', quality).set('x-fluxtrail-csrf', '1');
-    const trial = await post(`/api/v1/spc/characteristics/${ke}/trial-limits`).send({ chartKind: 'ewma' }).expect(201);
-    await post(`/api/v1/spc/control-limits/${trial.body.id}/freeze`).send({}).expect(200);
-    const frozen = jsonColumn<SpcStateData>((await server.db('spc_state').where({ characteristic_id: ke }).first('state_json')).state_json);
-    const lastBaselineRun = Number((await server.db('test_runs').max({ id: 'id' }).first())?.id);
+    const { ke, frozen, lastBaselineRun } = await frozenEwmaOfKe();
 
     // A drift upwards, posted 30 at a time.
     const values = Array.from({ length: 30 }, (_, i) => 50 + i * 0.01);
     await Promise.all(values.map((value) => ingestTestRun(server.db, withValue(plant, 'bemf.ke', value))));
 
-    const series = await server.db('measurements').join('test_runs', 'test_runs.id', 'measurements.run_id')
-      .where('measurements.characteristic_id', ke).andWhere('test_runs.id', '>', lastBaselineRun)
-      .orderBy('test_runs.id').select('test_runs.id as runId', 'test_runs.lot_id as lotId', 'measurements.value');
+    const series = await seriesAfter(ke, lastBaselineRun);
     let replayed = freshState(frozen.limits);
     for (const point of series) replayed = phaseTwoStep(replayed, { runId: point.runId, lotId: point.lotId, value: point.value }).state;
     const stored = jsonColumn<SpcStateData>((await server.db('spc_state').where({ characteristic_id: ke }).first('state_json')).state_json);
@@ -188,14 +199,7 @@ describe('ingest of runs posted at the same time', () => {
   });
 
   it('when signals open inside batches, then every run is stored once and each episode opens one signal, audited', async () => {
-    const quality = (await signIn(server.url, 'quality')).cookie;
-    const ke = plant.product.characteristics.find((c) => c.code === 'bemf.ke')!.id;
-    for (let i = 0; i < 100; i++) await ingestTestRun(server.db, withValue(plant, 'bemf.ke', i % 2 === 0 ? 49.9 : 50.1));
-    const post = (path: string) => request(server.url).post(path).set('cookie', quality).set('x-fluxtrail-csrf', '1');
-    const trial = await post(`/api/v1/spc/characteristics/${ke}/trial-limits`).send({ chartKind: 'ewma' }).expect(201);
-    await post(`/api/v1/spc/control-limits/${trial.body.id}/freeze`).send({}).expect(200);
-    const frozen = jsonColumn<SpcStateData>((await server.db('spc_state').where({ characteristic_id: ke }).first('state_json')).state_json);
-    const lastBaselineRun = Number((await server.db('test_runs').max({ id: 'id' }).first())?.id);
+    const { ke, frozen, lastBaselineRun } = await frozenEwmaOfKe();
 
     // Hold the writer busy: a run in control waits on the SPC state row, locked here, while
     // twenty more queue behind it; on release they are written as one batch, in which the values
@@ -217,9 +221,7 @@ describe('ingest of runs posted at the same time', () => {
     expect(outcomes.map((o) => o.status)).toEqual(documents.map(() => 201));
     expect(await server.db('test_runs').whereIn('run_uuid', documents.map((d) => d.runId)).count({ n: '*' })).toEqual([{ n: 20 }]);
     // The episodes that judging the stored series in run order opens and continues, whatever the batches were.
-    const series = await server.db('measurements').join('test_runs', 'test_runs.id', 'measurements.run_id')
-      .where('measurements.characteristic_id', ke).andWhere('test_runs.id', '>', lastBaselineRun)
-      .orderBy('test_runs.id').select('test_runs.id as runId', 'test_runs.lot_id as lotId', 'measurements.value');
+    const series = await seriesAfter(ke, lastBaselineRun);
     let state = freshState(frozen.limits);
     let opened = 0;
     let continued = 0;
