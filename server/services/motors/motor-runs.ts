@@ -23,21 +23,24 @@ export type MotorIdValue = number | Knex.QueryBuilder;
  * motor's index on test_runs, to be sent together with the rest of the motor's record.
  */
 export function runsOfMotorStatements(db: Knex, motorId: MotorIdValue): Statement[] {
+  const runIds = () => db('test_runs').where('motor_id', motorId).select('id');
   return [
+    // Named columns: the stored retry answer (response_json) is not part of the record.
     db('test_runs').join('stations', 'stations.id', 'test_runs.station_id')
       .leftJoin('limit_sets', 'limit_sets.id', 'test_runs.limit_set_id')
       .where('test_runs.motor_id', motorId).orderBy('test_runs.attempt', 'desc')
-      .select('test_runs.*', 'stations.code as station_code', 'stations.line as station_line', 'limit_sets.revision as limit_revision'),
+      .select('test_runs.id', 'test_runs.run_uuid', 'test_runs.attempt', 'test_runs.verdict', 'test_runs.started_at', 'test_runs.finished_at',
+        'test_runs.operator_badge', 'test_runs.program_version', 'test_runs.calibration_ok', 'test_runs.calibration_due',
+        'stations.code as station_code', 'stations.line as station_line', 'limit_sets.revision as limit_revision'),
     db('test_runs').join('measurements', 'measurements.run_id', 'test_runs.id')
       .join('characteristics', 'characteristics.id', 'measurements.characteristic_id')
       .leftJoin('limits', (on) => on.on('limits.limit_set_id', 'test_runs.limit_set_id').andOn('limits.characteristic_id', 'measurements.characteristic_id'))
       .where('test_runs.motor_id', motorId).orderBy(['characteristics.sort_order', 'characteristics.id'])
       .select('measurements.run_id', 'characteristics.code', 'characteristics.name', 'characteristics.unit', 'characteristics.test_step',
         'measurements.value', 'measurements.lsl', 'limits.nominal', 'measurements.usl', 'measurements.verdict'),
-    db('test_runs').join('waveforms', 'waveforms.run_id', 'test_runs.id')
-      .where('test_runs.motor_id', motorId).orderBy('waveforms.id').select('waveforms.run_id', 'waveforms.kind', 'waveforms.summary_json'),
-    db('test_runs').join('raw_readings', 'raw_readings.run_id', 'test_runs.id')
-      .where('test_runs.motor_id', motorId).orderBy('raw_readings.kind').select('raw_readings.run_id', 'raw_readings.kind', 'raw_readings.reading_json'),
+    // In the order of each table's own index (run, then id or kind), so MariaDB sorts nothing.
+    db('waveforms').whereIn('run_id', runIds()).orderBy(['run_id', 'id']).select('run_id', 'kind', 'summary_json'),
+    db('raw_readings').whereIn('run_id', runIds()).orderBy(['run_id', 'kind']).select('run_id', 'kind', 'reading_json'),
   ].map((query) => query.toSQL());
 }
 
