@@ -3,6 +3,7 @@ import type { Knex } from 'knex';
 import { startIdp } from '../idp-fake/index.js';
 import { loadConfig } from '../server/config.js';
 import { createDb } from '../server/db/knex.js';
+import { appNodeFlags } from '../scripts/lib/app-node-flags.mjs';
 
 export type BenchContext = {
   db: Knex;
@@ -44,7 +45,7 @@ export async function startBenchApp(log: (line: string) => void): Promise<BenchC
   await db.migrate.latest();
   // FLUXTRAIL_BENCH_NODE_ARGS adds flags to the app's processes, e.g. "--cpu-prof --cpu-prof-dir=.data/prof".
   const nodeArgs = (process.env.FLUXTRAIL_BENCH_NODE_ARGS ?? '').split(' ').filter(Boolean);
-  const child = spawn(process.execPath, [...nodeArgs, '--import', 'tsx', 'server/index.ts'], { env, stdio: ['ignore', 'ignore', 'inherit'] });
+  const child = spawn(process.execPath, [...appNodeFlags, ...nodeArgs, '--import', 'tsx', 'server/index.ts'], { env, stdio: ['ignore', 'ignore', 'inherit'] });
   const url = `http://127.0.0.1:${appPort}`;
   await waitForHealth(url, child);
   return {

@@ -7,6 +7,7 @@ import { ensureNodeModules } from './lib/deps.mjs';
 import { ensureMariadbInstalled, startMariadb, ensureDatabase } from './lib/mariadb.mjs';
 import { loadOrCreateSecrets } from './lib/secrets.mjs';
 import { runNodeSync } from './lib/children.mjs';
+import { appNodeFlags } from './lib/app-node-flags.mjs';
 
 const root = resolve(fileURLToPath(new URL('..', import.meta.url)));
 const port = Number(process.env.FLUXTRAIL_BENCH_DB_PORT ?? 3309);
@@ -30,7 +31,10 @@ const db = await startMariadb({ baseDir: join(root, '.data', 'bench-mariadb'), p
 let code = 0;
 try {
   ensureDatabase(db, { database: 'fluxtrail_bench', user: 'fluxtrail', password: secrets.dbPassword });
-  runNodeSync(['--import', 'tsx', 'bench/run.ts', ...process.argv.slice(2)], {
+  // The benchmark's own process builds the evidence pack, as the app's job runner does: it runs
+  // with the app's flags. FLUXTRAIL_BENCH_SELF_ARGS adds more, e.g. "--cpu-prof --cpu-prof-dir=.data/prof".
+  const selfArgs = [...appNodeFlags, ...(process.env.FLUXTRAIL_BENCH_SELF_ARGS ?? '').split(' ').filter(Boolean)];
+  runNodeSync([...selfArgs, '--import', 'tsx', 'bench/run.ts', ...process.argv.slice(2)], {
     cwd: root,
     env: {
       ...process.env,

@@ -8,6 +8,7 @@ import { ensureNodeModules } from './lib/deps.mjs';
 import { ensureMariadbInstalled, startMariadb, ensureDatabase } from './lib/mariadb.mjs';
 import { loadOrCreateSecrets } from './lib/secrets.mjs';
 import { runNode, runNodeSync, stopChild, waitForHttp } from './lib/children.mjs';
+import { appNodeFlags } from './lib/app-node-flags.mjs';
 
 const root = resolve(fileURLToPath(new URL('..', import.meta.url)));
 const dev = process.argv.includes('--dev');
@@ -92,7 +93,7 @@ try {
   children.push(runNode(['--import', 'tsx', 'idp-fake/main.ts'], { env, cwd: root, label: 'idp' }));
   children.push(runNode(['--import', 'tsx', 'mail-fake/main.ts'], { env, cwd: root, label: 'mail' }));
   await waitForHttp(`http://127.0.0.1:${ports.idp}/.well-known/openid-configuration`);
-  children.push(runNode(['--import', 'tsx', 'server/index.ts'], { env, cwd: root, label: 'app' }));
+  children.push(runNode([...appNodeFlags, '--import', 'tsx', 'server/index.ts'], { env, cwd: root, label: 'app' }));
   if (dev) children.push(runNode([join(root, 'node_modules/vite/bin/vite.js'), '--port', String(ports.vite), '--strictPort'], { env, cwd: root, label: 'vite' }));
   await waitForHttp(`http://127.0.0.1:${ports.app}/api/health`);
   for (const child of children) child.once('exit', (code) => { if (!stopping) { console.error(`A Fluxtrail process exited (code ${code}); stopping.`); void shutdown(1); } });
