@@ -4,7 +4,7 @@ import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node
 import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { ensureNodeModules } from './lib/deps.mjs';
-import { ensureMariadbInstalled, startMariadb, ensureDatabase } from './lib/mariadb.mjs';
+import { ensureMariadbInstalled, startMariadb, ensureDatabase, unixSocketEnv } from './lib/mariadb.mjs';
 import { loadOrCreateSecrets } from './lib/secrets.mjs';
 import { runNodeSync } from './lib/children.mjs';
 import { appNodeFlags } from './lib/app-node-flags.mjs';
@@ -38,7 +38,7 @@ try {
     cwd: root,
     env: {
       ...process.env,
-      FLUXTRAIL_DB_PORT: String(port), FLUXTRAIL_DB_NAME: 'fluxtrail_bench', FLUXTRAIL_DB_PASSWORD: secrets.dbPassword,
+      FLUXTRAIL_DB_PORT: String(port), ...unixSocketEnv(db.socket), FLUXTRAIL_DB_NAME: 'fluxtrail_bench', FLUXTRAIL_DB_PASSWORD: secrets.dbPassword,
       FLUXTRAIL_SESSION_SECRET: secrets.sessionSecret, FLUXTRAIL_DB_POOL_MAX: '40',
     },
   });

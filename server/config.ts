@@ -7,6 +7,8 @@ const configSchema = z.object({
   FLUXTRAIL_PUBLIC_URL: z.url().default('http://127.0.0.1:3000'),
   FLUXTRAIL_DB_HOST: z.string().default('127.0.0.1'),
   FLUXTRAIL_DB_PORT: z.coerce.number().int().min(1).max(65535).default(3307),
+  /** MariaDB's Unix socket, when it runs on this machine: used instead of host and port. */
+  FLUXTRAIL_DB_SOCKET: z.string().min(1).optional(),
   FLUXTRAIL_DB_USER: z.string().min(1).default('fluxtrail'),
   FLUXTRAIL_DB_PASSWORD: z.string().min(1, 'the database password must be set'),
   FLUXTRAIL_DB_NAME: z.string().regex(/^[A-Za-z0-9_]+$/, 'letters, digits and _ only').default('fluxtrail'),
@@ -30,7 +32,7 @@ export type Config = {
   host: string;
   port: number;
   publicUrl: string;
-  db: { host: string; port: number; user: string; password: string; database: string; poolMax: number };
+  db: { host: string; port: number; socketPath?: string; user: string; password: string; database: string; poolMax: number };
   oidc: { issuer: string; clientId: string; clientSecret: string; apiAudience: string };
   sessionSecret: string;
   smtp: { host: string; port: number; from: string };
@@ -56,7 +58,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     port: e.FLUXTRAIL_PORT,
     publicUrl: e.FLUXTRAIL_PUBLIC_URL.replace(/\/$/, ''),
     db: {
-      host: e.FLUXTRAIL_DB_HOST, port: e.FLUXTRAIL_DB_PORT, user: e.FLUXTRAIL_DB_USER,
+      host: e.FLUXTRAIL_DB_HOST, port: e.FLUXTRAIL_DB_PORT, socketPath: e.FLUXTRAIL_DB_SOCKET, user: e.FLUXTRAIL_DB_USER,
       password: e.FLUXTRAIL_DB_PASSWORD, database: e.FLUXTRAIL_DB_NAME, poolMax: e.FLUXTRAIL_DB_POOL_MAX,
     },
     oidc: {

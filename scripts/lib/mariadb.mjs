@@ -98,6 +98,15 @@ export async function startMariadb({ baseDir, port }) {
   };
 }
 
+/**
+ * FLUXTRAIL_DB_SOCKET (or `name`) for the app: MariaDB's Unix socket, which costs both sides less
+ * CPU per round trip than TCP on loopback. A socket path longer than the system allows (108 bytes
+ * on Linux) leaves the app on TCP.
+ */
+export function unixSocketEnv(socket, name = 'FLUXTRAIL_DB_SOCKET') {
+  return Buffer.byteLength(socket) < 100 ? { [name]: socket } : {};
+}
+
 /** Creates the database and the application user (password auth, both loopback host names). */
 export function ensureDatabase(server, { database, user, password }) {
   const quoted = password.replace(/'/g, "''");

@@ -7,7 +7,8 @@ function knexOptions(db: Config['db'], options: { multipleStatements: boolean; p
   return {
     client: 'mysql2',
     connection: {
-      host: db.host, port: db.port, user: db.user, password: db.password, database: db.database,
+      // A Unix socket, where MariaDB runs on this machine, costs both sides less CPU per round trip than TCP.
+      ...(db.socketPath ? { socketPath: db.socketPath } : { host: db.host, port: db.port }), user: db.user, password: db.password, database: db.database,
       charset: 'utf8mb4', timezone: 'Z', dateStrings: false, supportBigNumbers: true, bigNumberStrings: false,
       multipleStatements: options.multipleStatements,
     },

@@ -9,6 +9,7 @@ export function testConfig(overrides: { database: string; port: number; idpPort:
     FLUXTRAIL_PUBLIC_URL: `http://127.0.0.1:${overrides.port}`,
     FLUXTRAIL_DB_HOST: env.FLUXTRAIL_TEST_DB_HOST,
     FLUXTRAIL_DB_PORT: env.FLUXTRAIL_TEST_DB_PORT,
+    FLUXTRAIL_DB_SOCKET: env.FLUXTRAIL_TEST_DB_SOCKET,
     FLUXTRAIL_DB_USER: env.FLUXTRAIL_TEST_DB_USER,
     FLUXTRAIL_DB_PASSWORD: env.FLUXTRAIL_TEST_DB_PASSWORD,
     FLUXTRAIL_DB_NAME: overrides.database,

@@ -12,6 +12,13 @@ describe('loadConfig', () => {
     expect(config.oidc.apiAudience).toBe('urn:fluxtrail:api');
   });
 
+  it('when MariaDB\'s Unix socket is given, then the app connects through it instead of host and port', () => {
+    expect(loadConfig(minimal).db.socketPath).toBeUndefined();
+    const config = loadConfig({ ...minimal, FLUXTRAIL_DB_SOCKET: '/run/fluxtrail/mariadb.sock' });
+    expect(config.db.socketPath).toBe('/run/fluxtrail/mariadb.sock');
+    expect(() => loadConfig({ ...minimal, FLUXTRAIL_DB_SOCKET: '' })).toThrow(/FLUXTRAIL_DB_SOCKET/);
+  });
+
   it('when the port is not a number, then start-up stops naming the variable', () => {
     expect(() => loadConfig({ ...minimal, FLUXTRAIL_PORT: 'eighty' })).toThrow(/FLUXTRAIL_PORT/);
   });
