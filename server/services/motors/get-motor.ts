@@ -5,7 +5,8 @@ import { holdsQuery, toHoldView, type HoldRow, type HoldView } from '../holds/ho
 import { runsOfMotorStatements, runViews, type ReadingRow, type ResultRow, type RunRow, type RunView, type WaveformRow } from './motor-runs.js';
 import { auditEventsOfOneStatement, auditEventViews, type AuditRow, type AuditEventView } from './entity-audit-events.js';
 import { statementPool } from '../../db/knex.js';
-import { runStatements } from '../../db/statements.js';
+import { runStatements, type Statement } from '../../db/statements.js';
+import { StatementTemplates } from '../../db/statement-templates.js';
 import type { MotorStatus } from './list-motors.js';
 
 export type ReworkNoteView = { id: number; action: 'rework' | 'retest'; note: string; recordedBy: string; recordedAt: string };
@@ -25,17 +26,11 @@ type MotorRow = {
 };
 type NoteRow = { id: number; action: 'rework' | 'retest'; note: string; recorded_by: string; recorded_at: Date };
 
-/**
- * Everything recorded about one serial: product, lot, holds (its own and its lot's), runs, notes,
- * audit. Every read names the motor by its serial (a subquery on the unique serial) so that all of
- * them travel in one round trip on the multi-statement pool: a scan at the line must answer fast
- * while the stands are posting, and on a busy server each round trip waits its turn for the CPU.
- */
-export async function getMotor(db: Knex, serial: string): Promise<MotorRecord> {
-  const reader = statementPool(db) ?? db;
+/** The eleven reads of a motor's record, each naming the motor by its serial (value 0). */
+function motorRecordReads(reader: Knex, serial: string): Statement[] {
   const ofMotor = (column: 'id' | 'lot_id') => reader('motors').where({ serial }).select(column);
   const lotCode = reader('motors').join('lots', 'lots.id', 'motors.lot_id').where('motors.serial', serial).select('lots.code');
-  const [motors, components, motorHolds, lotHolds, notes, runs, results, waveforms, readings, motorAudit, lotAudit] = await runStatements(reader, [
+  return [
     reader('motors').join('products', 'products.id', 'motors.product_id').join('lots', 'lots.id', 'motors.lot_id')
       .where('motors.serial', serial)
       .select('motors.id', 'motors.serial', 'motors.status', 'lots.code as lot_code',
@@ -48,7 +43,23 @@ export async function getMotor(db: Knex, serial: string): Promise<MotorRecord> {
     ...runsOfMotorStatements(reader, ofMotor('id')),
     auditEventsOfOneStatement(reader, 'motor', serial),
     auditEventsOfOneStatement(reader, 'lot', lotCode),
-  ]) as [MotorRow[], ComponentRow[], HoldRow[], HoldRow[], NoteRow[], RunRow[], ResultRow[], WaveformRow[], ReadingRow[], AuditRow[], AuditRow[]];
+  ];
+}
+
+// Built by knex once, then reused with each serial: building them cost more than running them.
+const motorRecordTemplates = new StatementTemplates<'record'>((reader, _shape, value) => motorRecordReads(reader, value(0)));
+
+/**
+ * Everything recorded about one serial: product, lot, holds (its own and its lot's), runs, notes,
+ * audit. Every read names the motor by its serial (a subquery on the unique serial) so that all of
+ * them travel in one round trip on the multi-statement pool: a scan at the line must answer fast
+ * while the stands are posting, and on a busy server each round trip waits its turn for the CPU.
+ */
+export async function getMotor(db: Knex, serial: string): Promise<MotorRecord> {
+  const reader = statementPool(db) ?? db;
+  const [motors, components, motorHolds, lotHolds, notes, runs, results, waveforms, readings, motorAudit, lotAudit] = await runStatements(
+    reader, motorRecordTemplates.statements(reader, 'record', [serial]),
+  ) as [MotorRow[], ComponentRow[], HoldRow[], HoldRow[], NoteRow[], RunRow[], ResultRow[], WaveformRow[], ReadingRow[], AuditRow[], AuditRow[]];
   const motor = motors[0];
   if (!motor) throw notFound(`No motor with serial ${serial}.`);
   return {

@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
 import { runStatements, type Statement } from '../../db/statements.js';
+import { StatementTemplates } from '../../db/statement-templates.js';
 import { knownApprovedRevisions, loadApprovedLimits, rememberApprovedRevisions, type ApprovedRevision, type LimitRow } from './reference-data.js';
 
 export type LimitSetInForce = { id: number; revision: number; effectiveFrom: Date; limits: Map<number, LimitRow> };
@@ -13,12 +14,15 @@ type RevisionRow = { id: number; product_id: number; revision: number; effective
 
 /** The query for the approved revisions of these products, newest first. */
 export function approvedRevisionsStatement(db: Knex, productIds: readonly number[]): Statement {
-  return db('limit_sets')
-    .whereIn('product_id', productIds).andWhere({ status: 'approved' })
-    .orderBy([{ column: 'effective_from', order: 'desc' }, { column: 'revision', order: 'desc' }])
-    .select('id', 'product_id', 'revision', 'effective_from')
-    .toSQL();
+  return approvedRevisionsTemplates.statements(db, productIds.length, productIds)[0];
 }
+
+// Built once per number of products (every ingest batch reads them).
+const approvedRevisionsTemplates = new StatementTemplates<number>((db, count, value) => [db('limit_sets')
+  .whereIn('product_id', Array.from({ length: count }, (_, i) => value(i))).andWhere({ status: 'approved' })
+  .orderBy([{ column: 'effective_from', order: 'desc' }, { column: 'revision', order: 'desc' }])
+  .select('id', 'product_id', 'revision', 'effective_from')
+  .toSQL()]);
 
 /** Each product's approved revisions from that query's rows, kept for the next runs of this process. */
 export function rememberRevisionRows(productIds: readonly number[], rows: readonly RevisionRow[]): Map<number, ApprovedRevision[]> {

@@ -3,6 +3,7 @@ import type { Knex } from 'knex';
 import { openSignal } from '../signals/open-signal.js';
 import { displayBlocksStatement } from './display-blocks.js';
 import { TransactionNeeded, type Statement } from '../../db/statements.js';
+import { StatementTemplates } from '../../db/statement-templates.js';
 import { phaseTwoStep, type BrokenRule, type SpcStateData } from './phase-two-step.js';
 import type { SignalRule } from './chart-kinds.js';
 
@@ -16,7 +17,7 @@ export type IngestedRun = {
 export type SpcStateRow = { characteristic_id: number; control_limit_id: number; state_json: string | SpcStateData };
 
 /** The SPC state rows of these characteristics that judge values (SPC on, limits frozen), in key order. */
-function spcStateQuery(db: Knex, characteristicIds: readonly number[]) {
+function spcStateQuery(db: Knex, characteristicIds: ReadonlyArray<number | string>) {
   return db('spc_state')
     .whereIn('characteristic_id', characteristicIds.length > 0 ? characteristicIds : [0])
     .whereExists((q) => q.select(db.raw('1')).from('characteristics').whereRaw('characteristics.id = spc_state.characteristic_id').andWhere('spc_enabled', true))
@@ -31,13 +32,19 @@ function spcStateQuery(db: Knex, characteristicIds: readonly number[]) {
  * consistently, only spc_state is locked.
  */
 export function spcStateLockStatement(db: Knex, characteristicIds: readonly number[]): Statement {
-  return spcStateQuery(db, characteristicIds).forUpdate().toSQL();
+  return spcStateTemplates.statements(db, characteristicIds.length, characteristicIds)[1];
 }
 
 /** The same rows read without a lock, to foresee whether a batch opens a signal (signalWouldOpen). */
 export function spcStateReadStatement(db: Knex, characteristicIds: readonly number[]): Statement {
-  return spcStateQuery(db, characteristicIds).toSQL();
+  return spcStateTemplates.statements(db, characteristicIds.length, characteristicIds)[0];
 }
+
+// Built once per number of characteristics (every ingest batch reads them): the plain read, then the locking one.
+const spcStateTemplates = new StatementTemplates<number>((db, count, value) => {
+  const ids = Array.from({ length: count }, (_, i) => value(i));
+  return [spcStateQuery(db, ids).toSQL(), spcStateQuery(db, ids).forUpdate().toSQL()];
+});
 
 /**
  * Whether judging these runs, in run order, from these states would open a signal (a rule broken
