@@ -14,6 +14,7 @@ import { benchSpcChart } from './spc-chart.js';
 import { benchIngestWithRules } from './spc-ingest.js';
 import { benchIngestWithWaveforms } from './ingest-waveforms.js';
 import { benchMotorsList } from './motors-list.js';
+import { waitForQuietMachine } from './stats.js';
 
 const log = (line: string) => console.log(`[bench] ${line}`);
 const wanted = process.argv.slice(2);
@@ -47,6 +48,8 @@ try {
   results.dataset = { motors: dataset.motors, measurements: Number(measurementCount?.n ?? 0) };
   for (const section of sections) {
     if (wanted.length > 0 && !wanted.includes(section.name)) continue;
+    const waitedMs = await waitForQuietMachine();
+    if (waitedMs > 1500) log(`${section.name}: waited ${(waitedMs / 1000).toFixed(0)} s for the machine to settle`);
     results[section.key] = { ...(await section.run(ctx, dataset) as object), measuredAt: new Date().toISOString() };
     save();
   }

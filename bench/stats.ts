@@ -64,3 +64,19 @@ export function inControlValues(seed: number) {
   const uniform = () => { s = (Math.imul(s, 1664525) + 1013904223) >>> 0; return s / 4294967296; };
   return () => Math.round((100 + (uniform() + uniform() + uniform() - 1.5) * 4) * 1000) / 1000;
 }
+
+/**
+ * Waits (up to `limitMs`) until the machine has been nearly idle for a second: MariaDB flushes
+ * and purges for a while after a section that wrote a lot, and a section measured meanwhile
+ * would pay for the one before it. Returns how long it waited.
+ */
+export async function waitForQuietMachine(limitMs = 90_000, busyShare = 0.15, cores = 2): Promise<number> {
+  const start = performance.now();
+  for (;;) {
+    const cpuStart = machineBusyCpuMs();
+    const wallStart = performance.now();
+    await new Promise((resolve) => setTimeout(resolve, 1000));
+    const busy = (machineBusyCpuMs() - cpuStart) / ((performance.now() - wallStart) * cores);
+    if (busy < busyShare || performance.now() - start > limitMs) return Math.round(performance.now() - start);
+  }
+}
