@@ -16,15 +16,17 @@ describe('GET /api/health', () => {
     expect(response.body).toEqual({ status: 'ok', db: 'ok' });
   });
 
-  it('when MariaDB is unreachable, then it answers 503 with db down', async () => {
-    const deadConfig = { ...server.config, db: { ...server.config.db, port: 1 } };
-    const deadDb = createDb(deadConfig.db);
-    try {
-      const response = await request(buildApp({ config: deadConfig, db: deadDb })).get('/api/health');
-      expect(response.status).toBe(503);
-      expect(response.body.db).toBe('down');
-    } finally {
-      await deadDb.destroy();
+  it('when MariaDB is unreachable, over TCP or its socket, then it answers 503 with db down', async () => {
+    for (const unreachable of [{ socketPath: undefined, port: 1 }, { socketPath: '/nonexistent/mariadb.sock' }]) {
+      const deadConfig = { ...server.config, db: { ...server.config.db, ...unreachable } };
+      const deadDb = createDb(deadConfig.db);
+      try {
+        const response = await request(buildApp({ config: deadConfig, db: deadDb })).get('/api/health');
+        expect(response.status).toBe(503);
+        expect(response.body.db).toBe('down');
+      } finally {
+        await deadDb.destroy();
+      }
     }
   });
 });
