@@ -86,7 +86,7 @@ function parseHeader(header: string): { code: string; unit: string } {
 }
 
 /** An evidence pack of 100k motors × 40 results beside the bare write of the same cells and CSV lines, in two alternating rounds. */
-export async function benchEvidencePack(ctx: BenchContext) {
+export async function benchEvidencePack(ctx: Pick<BenchContext, 'db' | 'log'>) {
   const dir = join('.data', 'bench-evidence');
   await rm(dir, { recursive: true, force: true });
   await mkdir(dir, { recursive: true });

@@ -2,11 +2,11 @@
 // Sections: `npm run bench -- ingest` runs one; no argument runs all. Results are written after
 // every section, so a long run that is stopped keeps what it measured.
 import { mkdirSync, writeFileSync, existsSync, readFileSync } from 'node:fs';
+import { spawn } from 'node:child_process';
 import { ensureBenchDataset, type BenchDataset } from './dataset.js';
 import { startBenchApp, type BenchContext } from './harness.js';
 import { benchIngest } from './ingest.js';
 import { benchSpcRules } from './spc-rules.js';
-import { benchEvidencePack } from './evidence.js';
 import { benchAuditChain } from './audit-chain.js';
 import { benchAnalysis } from './analysis.js';
 import { benchYield } from './yield.js';
@@ -32,9 +32,20 @@ const sections: Section[] = [
   { name: 'spc-ingest', key: 'spcIngest', run: benchIngestWithRules },
   { name: 'yield', key: 'yield', run: benchYield },
   { name: 'motors-list', key: 'motorsList', run: benchMotorsList },
-  { name: 'evidence', key: 'evidencePack', run: (ctx) => benchEvidencePack(ctx) },
+  { name: 'evidence', key: 'evidencePack', run: () => inOwnProcess('bench/evidence-process.ts') },
   { name: 'audit', key: 'auditChain', run: (ctx) => benchAuditChain(ctx) },
 ];
+
+/** Runs a section's script in a fresh process with this process's Node flags; resolves with the JSON it prints. */
+function inOwnProcess(script: string): Promise<unknown> {
+  return new Promise((resolve, reject) => {
+    const child = spawn(process.execPath, [...process.execArgv, script], { stdio: ['ignore', 'pipe', 'inherit'] });
+    let output = '';
+    child.stdout.on('data', (chunk: Buffer) => { output += chunk.toString(); });
+    child.once('error', reject);
+    child.once('exit', (code) => (code === 0 ? resolve(JSON.parse(output)) : reject(new Error(`${script} exited with code ${code}`))));
+  });
+}
 
 function save() {
   mkdirSync('bench/results', { recursive: true });
