@@ -1,7 +1,8 @@
 // The cells an evidence pack wrote, kept for the benchmark's ceiling, which writes the same
 // cells bare. Kept by column: numbers and times in arrays of doubles (8 bytes a cell, nothing
 // for the garbage collector to trace), short repeated text once, so that millions of cells fit
-// in memory without slowing the ceiling that is written from them.
+// in memory. Text columns are arrays the collector does trace: they slow the turns that follow
+// the capture a little (the second pack as much as the ceiling).
 import { SheetColumns, type CellValue } from '../server/services/evidence/workbook/rolling-sheet.js';
 import type { SheetShape } from '../server/services/evidence/workbook/pack-workbook.js';
 
@@ -51,7 +52,7 @@ export class CapturedSheet {
     const kind = typeof value === 'number' ? 'number' : value instanceof Date ? 'date' : value === null ? null : 'any';
     if (column.kind === 'empty' && kind !== null) {
       column = kind === 'any' ? { kind, cells: new Array<CellValue>(this.rows).fill(null) } : { kind, cells: new Array<number>(this.rows).fill(NaN) };
-    } else if (kind !== null && column.kind !== 'empty' && column.kind !== kind) {
+    } else if (kind !== null && column.kind !== 'empty' && column.kind !== 'any' && column.kind !== kind) {
       column = { kind: 'any', cells: Array.from({ length: this.rows }, (_, r) => this.cell(i, r)) };
     }
     this.columns[i] = column;

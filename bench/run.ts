@@ -43,7 +43,12 @@ function inOwnProcess(script: string): Promise<unknown> {
     let output = '';
     child.stdout.on('data', (chunk: Buffer) => { output += chunk.toString(); });
     child.once('error', reject);
-    child.once('exit', (code) => (code === 0 ? resolve(JSON.parse(output)) : reject(new Error(`${script} exited with code ${code}`))));
+    // 'close', not 'exit': only then has all of its output arrived. The figures are its last line.
+    child.once('close', (code) => {
+      if (code !== 0) return reject(new Error(`${script} exited with code ${code}`));
+      const lines = output.trim().split('\n');
+      resolve(JSON.parse(lines[lines.length - 1]));
+    });
   });
 }
 

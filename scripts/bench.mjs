@@ -35,7 +35,7 @@ function rebuildIfGrown(server) {
   const exists = server.sql("SELECT COUNT(*) FROM information_schema.tables WHERE table_schema = 'fluxtrail_bench' AND table_name = 'test_runs'").trim().split('\n').at(-1);
   if (exists !== '1') return;
   const motors = Number(server.sql('SELECT COUNT(*) FROM fluxtrail_bench.motors').trim().split('\n').at(-1));
-  if (motors <= grownBoundMotors) return;
+  if (!(motors > grownBoundMotors)) return; // an unreadable count drops nothing
   console.log(`[bench] the set has grown to ${motors} motors through earlier runs: generating it afresh…`);
   server.sql('DROP DATABASE fluxtrail_bench');
 }

@@ -8,8 +8,14 @@ function marker(index: number): string {
   return `${markerPrefix}${index}`;
 }
 
+const markerPattern = /^\u0000value#(\d+)$/;
+
+/** The value a binding stands for, if it is a marker; a marker inside other text (a LIKE pattern) cannot be swapped and is refused. */
 function markerIndex(binding: unknown): number | undefined {
-  return typeof binding === 'string' && binding.startsWith(markerPrefix) ? Number(binding.slice(markerPrefix.length)) : undefined;
+  if (typeof binding !== 'string' || !binding.includes(markerPrefix)) return undefined;
+  const match = markerPattern.exec(binding);
+  if (!match) throw new Error('a statement template holds a value inside other text, which cannot be swapped');
+  return Number(match[1]);
 }
 
 /**
@@ -17,7 +23,8 @@ function markerIndex(binding: unknown): number | undefined {
  * (MySQL dialect) once per shape and then reused with new values. Building a query costs knex
  * more CPU than MariaDB spends on a small indexed read, and these statements run for every scan
  * and every ingest batch. The builder places `value(i)` wherever the i-th value goes; knex passes
- * values through as bindings, so each later use only swaps them.
+ * values through as bindings, so each later use only swaps them. A shape must fix everything the
+ * text depends on: knex writes `is null` for a null value, so values must not be null.
  */
 export class StatementTemplates<Shape extends string | number> {
   private readonly built = new Map<Shape, Statement[]>();

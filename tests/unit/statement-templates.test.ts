@@ -27,6 +27,11 @@ describe('StatementTemplates', () => {
     expect(second.bindings).toEqual([21, 22, 'BX-2', 500]);
   });
 
+  it('when a value sits inside other text (a LIKE pattern), then the template refuses it rather than send the marker', () => {
+    const templates = new StatementTemplates<'prefix'>((knex, _shape, value) => [db('motors').where('serial', 'like', `${value(0)}%`).select('id').toSQL()]);
+    expect(() => templates.statements(db, 'prefix', ['BX0'])).toThrow(/inside other text/);
+  });
+
   it('when fewer values are given than the template places, then it refuses rather than send a marker', () => {
     const templates = new StatementTemplates<'one'>((knex, _shape, value) => [byIdsAndSerial(value(0), [value(1)])]);
     expect(() => templates.statements(db, 'one', ['BX-1'])).toThrow(/needs value 1/);
