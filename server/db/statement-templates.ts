@@ -8,14 +8,14 @@ function marker(index: number): string {
   return `${markerPrefix}${index}`;
 }
 
-const markerPattern = /^\u0000value#(\d+)$/;
-
 /** The value a binding stands for, if it is a marker; a marker inside other text (a LIKE pattern) cannot be swapped and is refused. */
 function markerIndex(binding: unknown): number | undefined {
   if (typeof binding !== 'string' || !binding.includes(markerPrefix)) return undefined;
-  const match = markerPattern.exec(binding);
-  if (!match) throw new Error('a statement template holds a value inside other text, which cannot be swapped');
-  return Number(match[1]);
+  const index = binding.slice(markerPrefix.length);
+  if (!binding.startsWith(markerPrefix) || !/^\d+$/.test(index)) {
+    throw new Error('a statement template holds a value inside other text, which cannot be swapped');
+  }
+  return Number(index);
 }
 
 /**
