@@ -35,7 +35,7 @@ async function bareWrite(dir: string, shapes: readonly SheetShape[], cells: Read
     const sheet = workbook.addWorksheet(shape.name);
     sheet.addRow(shape.headers).commit();
     const rows = cells.get(shape.name);
-    for (let r = 0; r < (rows?.rows ?? 0); r++) sheet.addRow(rows!.row(r)).commit();
+    if (rows) for (let r = 0; r < rows.rows; r++) sheet.addRow(rows.row(r)).commit();
     sheet.commit();
   }
   await workbook.commit();
@@ -54,16 +54,17 @@ async function bareCsv(path: string, shapes: readonly SheetShape[], cells: Reado
   let text = '';
   for (const shape of shapes.filter((s) => s.name.startsWith('Results '))) {
     const rows = cells.get(shape.name);
+    if (!rows) continue;
     // Results columns: serial, run, attempt, started, station, calibration due, badge, program,
     // revision, verdict, then a value and a verdict column per characteristic ("CODE [unit]").
     const measured = shape.headers.slice(10).flatMap((h, i) => (i % 2 === 0 ? [{ at: 10 + i, ...parseHeader(h) }] : []));
-    for (let r = 0; r < (rows?.rows ?? 0); r++) {
-      const head = `${rows!.cell(0, r)},${rows!.cell(1, r)},${rows!.cell(2, r)},`;
-      const tail = `,${rows!.cell(4, r)},${rows!.cell(6, r)},${(rows!.cell(3, r) as Date).toISOString()}\r\n`;
+    for (let r = 0; r < rows.rows; r++) {
+      const head = `${rows.cell(0, r)},${rows.cell(1, r)},${rows.cell(2, r)},`;
+      const tail = `,${rows.cell(4, r)},${rows.cell(6, r)},${(rows.cell(3, r) as Date).toISOString()}\r\n`;
       for (const m of measured) {
-        const value = rows!.cell(m.at, r);
+        const value = rows.cell(m.at, r);
         if (value === null) continue;
-        text += `${head}${m.code},${value},${m.unit},90,110,${rows!.cell(m.at + 1, r)}${tail}`;
+        text += `${head}${m.code},${value},${m.unit},90,110,${rows.cell(m.at + 1, r)}${tail}`;
         lines += 1;
       }
       if (text.length > 1 << 16) {

@@ -4,7 +4,7 @@ import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node
 import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { ensureNodeModules } from './lib/deps.mjs';
-import { ensureMariadbInstalled, startMariadb, ensureDatabase, unixSocketEnv } from './lib/mariadb.mjs';
+import { ensureMariadbInstalled, startMariadb, ensureDatabase } from './lib/mariadb.mjs';
 import { loadOrCreateSecrets } from './lib/secrets.mjs';
 import { runNodeSync } from './lib/children.mjs';
 import { appNodeFlags } from './lib/app-node-flags.mjs';
@@ -31,10 +31,11 @@ const secrets = loadOrCreateSecrets(join(root, '.data', 'secrets.json'));
 // stated scale: past this bound the set is dropped and generated afresh (a few minutes). The
 // control-chart section's top-up runs are not counted: it adds them only up to its own target.
 const grownBoundMotors = 300_000;
+/** The one value a query prints (the client prints a header line above it). */
+const scalar = (server, sql) => server.sql(sql).trim().split('\n').at(-1);
 function rebuildIfGrown(server) {
-  const exists = server.sql("SELECT COUNT(*) FROM information_schema.tables WHERE table_schema = 'fluxtrail_bench' AND table_name = 'test_runs'").trim().split('\n').at(-1);
-  if (exists !== '1') return;
-  const motors = Number(server.sql('SELECT COUNT(*) FROM fluxtrail_bench.motors').trim().split('\n').at(-1));
+  if (scalar(server, "SELECT COUNT(*) FROM information_schema.tables WHERE table_schema = 'fluxtrail_bench' AND table_name = 'motors'") !== '1') return;
+  const motors = Number(scalar(server, 'SELECT COUNT(*) FROM fluxtrail_bench.motors'));
   if (!(motors > grownBoundMotors)) return; // an unreadable count drops nothing
   console.log(`[bench] the set has grown to ${motors} motors through earlier runs: generating it afresh…`);
   server.sql('DROP DATABASE fluxtrail_bench');
@@ -45,14 +46,14 @@ let code = 0;
 try {
   rebuildIfGrown(db);
   ensureDatabase(db, { database: 'fluxtrail_bench', user: 'fluxtrail', password: secrets.dbPassword });
-  // The benchmark's own process builds the evidence pack, as the app's job runner does: it runs
-  // with the app's flags. FLUXTRAIL_BENCH_SELF_ARGS adds more, e.g. "--cpu-prof --cpu-prof-dir=.data/prof".
+  // The benchmark's processes run with the app's flags: its evidence section builds the pack as the
+  // app's job runner does (bench/evidence-process.ts, started with the same flags). FLUXTRAIL_BENCH_SELF_ARGS adds more, e.g. "--cpu-prof --cpu-prof-dir=.data/prof".
   const selfArgs = [...appNodeFlags, ...(process.env.FLUXTRAIL_BENCH_SELF_ARGS ?? '').split(' ').filter(Boolean)];
   runNodeSync([...selfArgs, '--import', 'tsx', 'bench/run.ts', ...process.argv.slice(2)], {
     cwd: root,
     env: {
       ...process.env,
-      FLUXTRAIL_DB_PORT: String(port), ...unixSocketEnv(db.socket), FLUXTRAIL_DB_NAME: 'fluxtrail_bench', FLUXTRAIL_DB_PASSWORD: secrets.dbPassword,
+      FLUXTRAIL_DB_PORT: String(port), FLUXTRAIL_DB_SOCKET: db.socket, FLUXTRAIL_DB_NAME: 'fluxtrail_bench', FLUXTRAIL_DB_PASSWORD: secrets.dbPassword,
       FLUXTRAIL_SESSION_SECRET: secrets.sessionSecret, FLUXTRAIL_DB_POOL_MAX: '40',
     },
   });

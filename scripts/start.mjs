@@ -5,7 +5,7 @@ import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node
 import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { ensureNodeModules } from './lib/deps.mjs';
-import { ensureMariadbInstalled, startMariadb, ensureDatabase, unixSocketEnv } from './lib/mariadb.mjs';
+import { ensureMariadbInstalled, startMariadb, ensureDatabase } from './lib/mariadb.mjs';
 import { loadOrCreateSecrets } from './lib/secrets.mjs';
 import { runNode, runNodeSync, stopChild, waitForHttp } from './lib/children.mjs';
 import { appNodeFlags } from './lib/app-node-flags.mjs';
@@ -72,7 +72,8 @@ try {
     FLUXTRAIL_PORT: String(ports.app),
     FLUXTRAIL_PUBLIC_URL: publicUrl,
     FLUXTRAIL_DB_PORT: String(ports.db),
-    ...unixSocketEnv(db.socket),
+    // MariaDB's Unix socket: less CPU per round trip, on both sides, than TCP on loopback.
+    FLUXTRAIL_DB_SOCKET: db.socket,
     FLUXTRAIL_DB_PASSWORD: secrets.dbPassword,
     FLUXTRAIL_DB_NAME: 'fluxtrail',
     FLUXTRAIL_SESSION_SECRET: secrets.sessionSecret,

@@ -8,7 +8,7 @@ import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { randomBytes } from 'node:crypto';
 import { ensureNodeModules, ensureDebianPackage } from './lib/deps.mjs';
-import { ensureMariadbInstalled, startMariadb, ensureDatabase, unixSocketEnv } from './lib/mariadb.mjs';
+import { ensureMariadbInstalled, startMariadb, ensureDatabase } from './lib/mariadb.mjs';
 import { runNodeSync } from './lib/children.mjs';
 
 const root = resolve(fileURLToPath(new URL('..', import.meta.url)));
@@ -34,8 +34,8 @@ try {
     ...process.env,
     FLUXTRAIL_TEST_DB_HOST: '127.0.0.1',
     FLUXTRAIL_TEST_DB_PORT: String(port),
-    // Over MariaDB's Unix socket, as `npm start` and the benchmark connect (TCP is used where the path is too long).
-    ...unixSocketEnv(db.socket, 'FLUXTRAIL_TEST_DB_SOCKET'),
+    // Over MariaDB's Unix socket, as `npm start` and the benchmark connect.
+    FLUXTRAIL_TEST_DB_SOCKET: db.socket,
     FLUXTRAIL_TEST_DB_USER: 'fluxtrail_test',
     FLUXTRAIL_TEST_DB_PASSWORD: password,
     FLUXTRAIL_TEST_DIST: join(root, '.data', 'test-dist'),

@@ -1,5 +1,5 @@
 // Flags of the app's Node.js processes, given by `npm start` and by the benchmark (to the app it
-// starts and to its own process, which builds the evidence pack as the app's job runner does).
+// starts, and to its own processes: one of them builds the evidence pack as the app's job runner does).
 //
 // --max-semi-space-size=32 (MB, default 16): a larger young generation. Building an evidence pack allocates
 // hundreds of short-lived objects per row (exceljs's cells and XML pieces); with the default young

@@ -98,15 +98,6 @@ export async function startMariadb({ baseDir, port }) {
   };
 }
 
-/**
- * FLUXTRAIL_DB_SOCKET (or `name`) for the app: MariaDB's Unix socket, which costs both sides less
- * CPU per round trip than TCP on loopback. (The server itself listens on that socket, so a path too
- * long for one, 108 bytes on Linux, already stops it at start.)
- */
-export function unixSocketEnv(socket, name = 'FLUXTRAIL_DB_SOCKET') {
-  return { [name]: socket };
-}
-
 /** Creates the database and the application user (password auth, both loopback host names). */
 export function ensureDatabase(server, { database, user, password }) {
   const quoted = password.replace(/'/g, "''");

@@ -18,6 +18,11 @@ function markerIndex(binding: unknown): number | undefined {
   return Number(index);
 }
 
+/** Values 0…count−1 as a list, for a template whose shape is the length of a list of ids. */
+export function valueList(count: number, value: (index: number) => string): string[] {
+  return Array.from({ length: count }, (_, i) => value(i));
+}
+
 /**
  * Statements whose text depends only on a shape (such as how many ids a list holds), built by knex
  * (MySQL dialect) once per shape and then reused with new values. Building a query costs knex

@@ -1,6 +1,6 @@
 import type { Knex } from 'knex';
 import { runStatements, type Statement } from '../../db/statements.js';
-import { StatementTemplates } from '../../db/statement-templates.js';
+import { StatementTemplates, valueList } from '../../db/statement-templates.js';
 import { knownApprovedRevisions, loadApprovedLimits, rememberApprovedRevisions, type ApprovedRevision, type LimitRow } from './reference-data.js';
 
 export type LimitSetInForce = { id: number; revision: number; effectiveFrom: Date; limits: Map<number, LimitRow> };
@@ -19,7 +19,7 @@ export function approvedRevisionsStatement(db: Knex, productIds: readonly number
 
 // Built once per number of products (every ingest batch reads them).
 const approvedRevisionsTemplates = new StatementTemplates<number>((db, count, value) => [db('limit_sets')
-  .whereIn('product_id', Array.from({ length: count }, (_, i) => value(i))).andWhere({ status: 'approved' })
+  .whereIn('product_id', valueList(count, value)).andWhere({ status: 'approved' })
   .orderBy([{ column: 'effective_from', order: 'desc' }, { column: 'revision', order: 'desc' }])
   .select('id', 'product_id', 'revision', 'effective_from')
   .toSQL()]);

@@ -3,7 +3,7 @@ import type { Knex } from 'knex';
 import { openSignal } from '../signals/open-signal.js';
 import { displayBlocksStatement } from './display-blocks.js';
 import { TransactionNeeded, type Statement } from '../../db/statements.js';
-import { StatementTemplates } from '../../db/statement-templates.js';
+import { StatementTemplates, valueList } from '../../db/statement-templates.js';
 import { phaseTwoStep, type BrokenRule, type SpcStateData } from './phase-two-step.js';
 import type { SignalRule } from './chart-kinds.js';
 
@@ -32,19 +32,17 @@ function spcStateQuery(db: Knex, characteristicIds: ReadonlyArray<number | strin
  * consistently, only spc_state is locked.
  */
 export function spcStateLockStatement(db: Knex, characteristicIds: readonly number[]): Statement {
-  return spcStateTemplates.statements(db, characteristicIds.length, characteristicIds)[1];
+  return spcStateLockTemplates.statements(db, characteristicIds.length, characteristicIds)[0];
 }
 
 /** The same rows read without a lock, to foresee whether a batch opens a signal (signalWouldOpen). */
 export function spcStateReadStatement(db: Knex, characteristicIds: readonly number[]): Statement {
-  return spcStateTemplates.statements(db, characteristicIds.length, characteristicIds)[0];
+  return spcStateReadTemplates.statements(db, characteristicIds.length, characteristicIds)[0];
 }
 
-// Built once per number of characteristics (every ingest batch reads them): the plain read, then the locking one.
-const spcStateTemplates = new StatementTemplates<number>((db, count, value) => {
-  const ids = Array.from({ length: count }, (_, i) => value(i));
-  return [spcStateQuery(db, ids).toSQL(), spcStateQuery(db, ids).forUpdate().toSQL()];
-});
+// Built once per number of characteristics (every ingest batch reads them).
+const spcStateReadTemplates = new StatementTemplates<number>((db, count, value) => [spcStateQuery(db, valueList(count, value)).toSQL()]);
+const spcStateLockTemplates = new StatementTemplates<number>((db, count, value) => [spcStateQuery(db, valueList(count, value)).forUpdate().toSQL()]);
 
 /**
  * Whether judging these runs, in run order, from these states would open a signal (a rule broken
