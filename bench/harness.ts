@@ -4,6 +4,7 @@ import { startIdp } from '../idp-fake/index.js';
 import { loadConfig } from '../server/config.js';
 import { createDb } from '../server/db/knex.js';
 import { appNodeFlags } from '../scripts/lib/app-node-flags.mjs';
+import { defaultAppWorkers } from '../scripts/lib/app-workers.mjs';
 
 export type BenchContext = {
   db: Knex;
@@ -30,8 +31,8 @@ async function waitForHealth(url: string, child: ChildProcess): Promise<void> {
 }
 
 /**
- * The real app as it runs in production — separate processes, one per core (FLUXTRAIL_WORKERS,
- * default 2) — and the IdP fake, against the bench database. Jobs are off so only the measured
+ * The real app as it runs in production — as many processes as `npm start` runs (FLUXTRAIL_WORKERS,
+ * default one per core less MariaDB's) — and the IdP fake, against the bench database. Jobs are off so only the measured
  * work runs. The bench's own queries use a connection pool of their own.
  */
 export async function startBenchApp(log: (line: string) => void): Promise<BenchContext> {
@@ -39,7 +40,7 @@ export async function startBenchApp(log: (line: string) => void): Promise<BenchC
   const env = {
     ...process.env, FLUXTRAIL_PORT: String(appPort), FLUXTRAIL_PUBLIC_URL: `http://127.0.0.1:${appPort}`,
     FLUXTRAIL_OIDC_ISSUER: idp.issuer, FLUXTRAIL_STATIC_DIR: '.data/no-static', FLUXTRAIL_JOBS: 'off',
-    FLUXTRAIL_WORKERS: process.env.FLUXTRAIL_WORKERS ?? '2',
+    FLUXTRAIL_WORKERS: process.env.FLUXTRAIL_WORKERS ?? String(defaultAppWorkers()),
   };
   const db = createDb(loadConfig(env).db);
   await db.migrate.latest();

@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { spawn } from 'node:child_process';
 import { benchCharacteristicCode, benchProductCode, type BenchDataset } from './dataset.js';
 import { clientToken, type BenchContext } from './harness.js';
-import { inControlValues, machineBusyCpuMs, percentile, round, runPool } from './stats.js';
+import { cpuByProcessMs, inControlValues, machineBusyCpuMs, percentile, round, runPool } from './stats.js';
 import { connectStands, httpRequest } from './http-client.js';
 
 const runsPerMeasurement = 4000;
@@ -88,15 +88,20 @@ export async function benchIngest(ctx: BenchContext, dataset: BenchDataset, tag:
   // API and raw ceiling take turns, a quarter of the runs each time, so that both meet the same
   // moments of a shared machine (whose speed drifts by tens of percent within minutes).
   ctx.log(`ingest: ${runsPerMeasurement} runs through the API and the same rows through knex directly (raw ceiling), ${concurrentStations} concurrent, in ${rounds} alternating rounds…`);
-  const api = { seconds: 0, cpuMs: 0 };
-  const raw = { seconds: 0, cpuMs: 0 };
+  const api = { seconds: 0, cpuMs: 0, mariadb: 0, app: 0, bench: 0 };
+  const raw = { seconds: 0, cpuMs: 0, mariadb: 0, app: 0, bench: 0 };
   const perRound = runsPerMeasurement / rounds;
-  const measure = async (into: { seconds: number; cpuMs: number }, work: () => Promise<void>) => {
+  const measure = async (into: typeof api, work: () => Promise<void>) => {
     const start = performance.now();
     const cpuStart = machineBusyCpuMs();
+    const byProcessStart = cpuByProcessMs();
     await work();
     into.seconds += (performance.now() - start) / 1000;
     into.cpuMs += machineBusyCpuMs() - cpuStart;
+    const byProcess = cpuByProcessMs();
+    into.mariadb += byProcess.mariadb - byProcessStart.mariadb;
+    into.app += byProcess.app - byProcessStart.app;
+    into.bench += byProcess.bench - byProcessStart.bench;
   };
   for (let round = 0; round < rounds; round++) {
     const offset = round * perRound;
@@ -121,6 +126,11 @@ export async function benchIngest(ctx: BenchContext, dataset: BenchDataset, tag:
     apiToRawRatio: round(apiRunsPerS / rawRunsPerS, 3),
     // CPU of the whole machine per run (app, MariaDB and the benchmark's clients together).
     machineCpuMsPerRun: { api: round(apiCpuMsPerRun), raw: round(rawCpuMsPerRun) },
+    // The same, by process: where the CPU went (the rest is the kernel and other processes).
+    cpuMsPerRunByProcess: {
+      api: { mariadb: round(api.mariadb / runsPerMeasurement), app: round(api.app / runsPerMeasurement), bench: round(api.bench / runsPerMeasurement) },
+      raw: { mariadb: round(raw.mariadb / runsPerMeasurement), app: round(raw.app / runsPerMeasurement), bench: round(raw.bench / runsPerMeasurement) },
+    },
     lookupUnderIngestMs: { samples: latencies.length, p50: round(percentile(latencies, 50)), p95: round(percentile(latencies, 95)), p99: round(percentile(latencies, 99)) },
     targets: { apiToRawRatio: '≥ 0.60', lookupP95Ms: '≤ 25' },
   };

@@ -1,4 +1,4 @@
-import { readFileSync } from 'node:fs';
+import { readdirSync, readFileSync } from 'node:fs';
 
 /** Percentile of a sample by the nearest-rank method (sorted copy). */
 export function percentile(values: number[], p: number): number {
@@ -79,4 +79,38 @@ export async function waitForQuietMachine(limitMs = 90_000, busyShare = 0.15, co
     const busy = (machineBusyCpuMs() - cpuStart) / ((performance.now() - wallStart) * cores);
     if (busy < busyShare || performance.now() - start > limitMs) return Math.round(performance.now() - start);
   }
+}
+
+/** CPU time (user + system, ms) of one process so far; 0 once it has gone. */
+function processCpuMs(pid: number): number {
+  try {
+    const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
+    const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+    return ((Number(fields[11]) + Number(fields[12])) / 100) * 1000; // utime, stime in USER_HZ ticks
+  } catch {
+    return 0;
+  }
+}
+
+function commandLineOf(pid: string): string {
+  try {
+    return readFileSync(`/proc/${pid}/cmdline`, 'utf8').replaceAll('\0', ' ');
+  } catch {
+    return '';
+  }
+}
+
+/**
+ * CPU time so far of the processes a section's figures are made of: the bench's MariaDB, the
+ * app's processes and this benchmark process. Read before and after a phase, it shows where the
+ * machine's CPU went (the rest of machineBusyCpuMs is the kernel and other processes).
+ */
+export function cpuByProcessMs(): { mariadb: number; app: number; bench: number } {
+  const totals = { mariadb: 0, app: 0, bench: processCpuMs(process.pid) };
+  for (const pid of readdirSync('/proc').filter((name) => /^\d+$/.test(name))) {
+    const command = commandLineOf(pid);
+    if (command.includes('mariadbd') && command.includes('bench-mariadb')) totals.mariadb += processCpuMs(Number(pid));
+    else if (command.includes('server/index.ts')) totals.app += processCpuMs(Number(pid));
+  }
+  return totals;
 }

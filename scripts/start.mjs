@@ -9,6 +9,7 @@ import { ensureMariadbInstalled, startMariadb, ensureDatabase } from './lib/mari
 import { loadOrCreateSecrets } from './lib/secrets.mjs';
 import { runNode, runNodeSync, stopChild, waitForHttp } from './lib/children.mjs';
 import { appNodeFlags } from './lib/app-node-flags.mjs';
+import { defaultAppWorkers } from './lib/app-workers.mjs';
 
 const root = resolve(fileURLToPath(new URL('..', import.meta.url)));
 const dev = process.argv.includes('--dev');
@@ -81,7 +82,7 @@ try {
     FLUXTRAIL_SMTP_PORT: String(ports.smtp),
     FLUXTRAIL_DATA_DIR: dataDir,
     FLUXTRAIL_STATIC_DIR: join(root, 'dist'),
-    FLUXTRAIL_WORKERS: process.env.FLUXTRAIL_WORKERS ?? '2', // one app process per core
+    FLUXTRAIL_WORKERS: process.env.FLUXTRAIL_WORKERS ?? String(defaultAppWorkers()),
     IDP_PORT: String(ports.idp),
     APP_BASE_URLS: `http://127.0.0.1:${ports.app},http://127.0.0.1:${ports.vite}`,
     MAIL_SMTP_PORT: String(ports.smtp),

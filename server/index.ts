@@ -48,7 +48,8 @@ const isMain = import.meta.url === `file://${process.argv[1]}`;
 if (isMain) {
   try {
     const config = loadConfig();
-    if (config.workers > 1 && cluster.isPrimary) {
+    // Even a single app process runs under the cluster's primary, which replaces it should it die.
+    if (cluster.isPrimary) {
       runWorkers(config.workers);
     } else {
       await serveUntilStopped(config);

@@ -9,7 +9,9 @@ import { ingestTestRun } from '../../server/services/runs/ingest-test-run.js';
 import { jsonColumn } from '../../server/db/json-column.js';
 import { freshState, phaseTwoStep, type SpcStateData } from '../../server/services/spc/phase-two-step.js';
 import { AppError } from '../../server/errors.js';
-import { statementPool } from '../../server/db/knex.js';
+import { createDb, statementPool } from '../../server/db/knex.js';
+import { testConfig } from '../support/test-config.js';
+import { testPorts } from '../support/ports.js';
 import { createPlant, createProduct, createStation, nextSerial, runDocument, type PlantFixture } from '../factories.js';
 
 // Stands post concurrently; the writer stores the runs that arrive together in one transaction.
@@ -177,6 +179,33 @@ describe('ingest of runs posted at the same time', () => {
     const { episodes: _replayed, ...replayedState } = replayed;
     expect(storedState).toEqual(replayedState);
     expect(stored.ewma?.t).toBe(30);
+  });
+  it('when two app processes each write two batches at once, then every SPC state is still stepped in run order and attempts count in order', async () => {
+    const { ke, frozen, lastBaselineRun } = await frozenEwmaOfKe();
+    // A second knex instance has a writer of its own, as a second app process would.
+    const second = createDb(testConfig({ database: 'fluxtrail_test', port: testPorts.apiApp, idpPort: testPorts.idp, smtpPort: testPorts.smtp }).db);
+    try {
+      const retested = nextSerial(plant.product);
+      const documents = Array.from({ length: 96 }, (_, i) => withValue(plant, 'bemf.ke', 50 + (i % 12) * 0.02, i % 8 === 0 ? { serial: retested } : {}));
+      // Sixteen stands at a time, alternating between the two processes.
+      for (let from = 0; from < documents.length; from += 16) {
+        await Promise.all(documents.slice(from, from + 16).map((d, i) => ingestTestRun(i % 2 === 0 ? server.db : second, d)));
+      }
+
+      const series = await seriesAfter(ke, lastBaselineRun);
+      expect(series).toHaveLength(96);
+      let replayed = freshState(frozen.limits);
+      for (const point of series) replayed = phaseTwoStep(replayed, { runId: point.runId, lotId: point.lotId, value: point.value }).state;
+      const stored = await server.db('spc_state').where({ characteristic_id: ke }).first('state_json', 'last_run_id');
+      const { episodes: _stored, ...storedState } = jsonColumn<SpcStateData>(stored.state_json);
+      const { episodes: _replayed, ...replayedState } = replayed;
+      expect(storedState).toEqual(replayedState);
+      expect(Number(stored.last_run_id)).toBe(series[series.length - 1].runId);
+      const attempts = await server.db('test_runs').join('motors', 'motors.id', 'test_runs.motor_id').where('motors.serial', retested).orderBy('test_runs.id').pluck('attempt');
+      expect(attempts).toEqual([1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12]);
+    } finally {
+      await second.destroy();
+    }
   });
   it('when a batch holds runs from a stand overdue for calibration, then every run is stored once and each of those motors is held once', async () => {
     // A calibration hold writes the audit chain, which the writer's hand-driven transaction cannot: the batch goes through a knex one.

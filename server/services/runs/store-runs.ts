@@ -3,6 +3,7 @@ import { invalid } from '../../errors.js';
 import type { ResultInput, TestRunDocument, TestRunResponse } from '../../schemas/test-run.js';
 import { motorsForRunsStatement, pointMotorsAtRunsStatement } from '../motors/refresh-motor-status.js';
 import { runStatements, TransactionNeeded, type Statement } from '../../db/statements.js';
+import { numberLiteral, wordLiteral } from '../../db/sql-literals.js';
 import { placeHold } from '../holds/place-hold.js';
 import { signalWouldOpen, spcStateLockStatement, spcStateReadStatement, spcStatementsAfterIngest, type IngestedRun, type SpcStateRow } from '../spc/evaluate-after-ingest.js';
 import { yieldStatementsAfterIngest } from '../yield/update-yield-rollups.js';
@@ -46,11 +47,11 @@ type LockedMotor = { id: number; serial: string; product_id: number; lot_id: num
 /**
  * Writes a batch of checked runs of distinct serials in the channel's transaction and returns each
  * run's answer, in the order given. Every table gets one statement for the whole batch, and the
- * statements travel in three round trips: reads and the motor rows; the runs and the SPC state
- * they lock; every other write (on a direct channel the first carries START TRANSACTION and the
+ * statements travel in three round trips: reads and the motor rows; the SPC state they lock and
+ * the runs; every other write (on a direct channel the first carries START TRANSACTION and the
  * last COMMIT). Hot rows (SPC state, display blocks, yield counters)
  * are thus locked once per batch, for a short time. Lock order, as in every ingest: motor rows (by
- * serial) → runs → SPC state → measurements, motor pointers, display blocks → yield rollups →
+ * serial) → SPC state → runs → measurements, motor pointers, display blocks → yield rollups →
  * calibration holds and their audit. Throws when any run cannot be stored (a serial of another
  * product or lot, a runId already taken): the caller rolls back and stores the runs one by one;
  * on a direct channel, TransactionNeeded before anything is kept: the caller uses a knex one.
@@ -86,7 +87,10 @@ export async function storeRuns(channel: BatchChannel, runs: RunToStore[]): Prom
   });
   // The runs will be numbered in this order; a signal foreseen goes to a knex transaction before anything is written.
   if (spcSnapshot && signalWouldOpen(stored.map((s, i) => ingestedRun(s, i + 1)), spcSnapshot)) throw new TransactionNeeded('an SPC signal opens');
-  const [runRows, stateRows] = await send([insertRunsStatement(stored), spcStateLockStatement(db, characteristicIds)]) as [Array<{ id: number | string; run_uuid: string }>, SpcStateRow[]];
+  // The SPC state is locked before the runs get their ids: of two batches written at once (by one
+  // writer or two processes) that share a characteristic, the one stepping its state first then
+  // also has the lower run ids, so every state is stepped in run order, as the charts show it.
+  const [stateRows, runRows] = await send([spcStateLockStatement(db, characteristicIds), insertRunsStatement(stored)]) as [SpcStateRow[], Array<{ id: number | string; run_uuid: string }>];
   const runIds = new Map(runRows.map((row) => [row.run_uuid, Number(row.id)]));
   for (const s of stored) s.runId = runIds.get(s.run.document.runId) as number;
 
@@ -147,17 +151,21 @@ function insertRunsStatement(stored: readonly StoredRun[]): Statement {
   };
 }
 
-/** Every measurement of the batch in one statement. */
+/**
+ * Every measurement of the batch in one statement, its values written into the text (all numbers
+ * the app checked, and verdicts): a batch of 16 runs would otherwise bind 3,840 values.
+ */
 function measurementsStatement(stored: ReadonlyArray<StoredRun & { runId: number }>): Statement {
-  const bindings: Array<number | string | null> = [];
+  const rows: string[] = [];
   for (const { run, runId } of stored) {
-    for (const r of run.judged.results) bindings.push(runId, r.characteristicId, r.value, r.lsl, r.usl, r.verdict);
+    for (const r of run.judged.results) {
+      rows.push(`(${numberLiteral(runId)}, ${numberLiteral(r.characteristicId)}, ${numberLiteral(r.value)}, ${numberLiteral(r.lsl)}, ${numberLiteral(r.usl)}, ${wordLiteral(r.verdict, verdicts)})`);
+    }
   }
-  return {
-    sql: `INSERT INTO measurements (run_id, characteristic_id, value, lsl, usl, verdict) VALUES ${Array.from({ length: bindings.length / 6 }, () => '(?, ?, ?, ?, ?, ?)').join(', ')}`,
-    bindings,
-  };
+  return { sql: `INSERT INTO measurements (run_id, characteristic_id, value, lsl, usl, verdict) VALUES ${rows.join(', ')}`, bindings: [] };
 }
+
+const verdicts = ['pass', 'fail'] as const;
 
 /** A run from a station whose calibration had expired is kept, flagged, and holds its motor. */
 async function holdForCalibration(trx: Knex.Transaction, run: RunToStore): Promise<void> {
