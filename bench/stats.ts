@@ -81,18 +81,19 @@ export async function waitForQuietMachine(limitMs = 90_000, busyShare = 0.15, co
   }
 }
 
-/** CPU time (user + system, ms) of one process so far; 0 once it has gone. */
-function processCpuMs(pid: number): number {
+/** utime + stime (ms) and the parent of one process; null once it has gone. */
+function processStat(pid: number): { cpuMs: number; parent: number } | null {
   try {
     const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
     const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
-    return ((Number(fields[11]) + Number(fields[12])) / 100) * 1000; // utime, stime in USER_HZ ticks
+    // Fields 4, 14 and 15 of proc(5): ppid, utime and stime, the times in USER_HZ (100) ticks.
+    return { parent: Number(fields[1]), cpuMs: ((Number(fields[11]) + Number(fields[12])) / 100) * 1000 };
   } catch {
-    return 0;
+    return null;
   }
 }
 
-function commandLineOf(pid: string): string {
+function commandLineOf(pid: number): string {
   try {
     return readFileSync(`/proc/${pid}/cmdline`, 'utf8').replaceAll('\0', ' ');
   } catch {
@@ -102,15 +103,26 @@ function commandLineOf(pid: string): string {
 
 /**
  * CPU time so far of the processes a section's figures are made of: the bench's MariaDB, the
- * app's processes and this benchmark process. Read before and after a phase, it shows where the
- * machine's CPU went (the rest of machineBusyCpuMs is the kernel and other processes).
+ * app's processes this benchmark started (its descendants running server/index.ts) and this
+ * benchmark process. Read before and after a phase, it shows where the machine's CPU went (the
+ * rest of machineBusyCpuMs is the kernel and other processes).
  */
 export function cpuByProcessMs(): { mariadb: number; app: number; bench: number } {
-  const totals = { mariadb: 0, app: 0, bench: processCpuMs(process.pid) };
-  for (const pid of readdirSync('/proc').filter((name) => /^\d+$/.test(name))) {
+  const stats = new Map<number, { cpuMs: number; parent: number }>();
+  for (const name of readdirSync('/proc')) {
+    if (!/^\d+$/.test(name)) continue;
+    const stat = processStat(Number(name));
+    if (stat) stats.set(Number(name), stat);
+  }
+  const descendsFromBench = (pid: number): boolean => {
+    for (let p = stats.get(pid)?.parent; p !== undefined && p > 1; p = stats.get(p)?.parent) if (p === process.pid) return true;
+    return false;
+  };
+  const totals = { mariadb: 0, app: 0, bench: stats.get(process.pid)?.cpuMs ?? 0 };
+  for (const [pid, stat] of stats) {
     const command = commandLineOf(pid);
-    if (command.includes('mariadbd') && command.includes('bench-mariadb')) totals.mariadb += processCpuMs(Number(pid));
-    else if (command.includes('server/index.ts')) totals.app += processCpuMs(Number(pid));
+    if (command.includes('mariadbd') && command.includes('bench-mariadb')) totals.mariadb += stat.cpuMs;
+    else if (command.includes('server/index.ts') && descendsFromBench(pid)) totals.app += stat.cpuMs;
   }
   return totals;
 }

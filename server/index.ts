@@ -16,8 +16,9 @@ export type RunningServer = { server: Server; db: Knex; config: Config; url: str
 export async function startServer(config: Config = loadConfig()): Promise<RunningServer> {
   const db = createDb(config.db);
   const app = buildApp({ config, db });
-  const server = await new Promise<Server>((resolve) => {
-    const s = app.listen(config.port, config.host, () => resolve(s));
+  // Express 5 hands a listen error (a port taken) to the callback.
+  const server = await new Promise<Server>((resolve, reject) => {
+    const s = app.listen(config.port, config.host, (error?: Error) => (error ? reject(error) : resolve(s)));
   });
   const { port } = server.address() as AddressInfo;
   const jobs = config.jobsEnabled ? startJobs({ db, config }) : undefined;
@@ -39,7 +40,9 @@ export async function startServer(config: Config = loadConfig()): Promise<Runnin
 async function serveUntilStopped(config: Config) {
   const running = await startServer(config);
   console.log(`Fluxtrail API and app on ${running.config.publicUrl} (process ${process.pid})`);
-  const shutdown = () => void running.stop().then(() => process.exit(0));
+  // Once: under a terminal a worker gets SIGINT from it and SIGTERM from the primary.
+  let stopping: Promise<void> | undefined;
+  const shutdown = () => { stopping ??= running.stop().then(() => process.exit(0)); };
   process.on('SIGTERM', shutdown);
   process.on('SIGINT', shutdown);
 }

@@ -20,5 +20,7 @@ describe('SQL literals', () => {
     expect(wordLiteral('pass', ['pass', 'fail'])).toBe(mysql.escape('pass'));
     expect(wordLiteral('fail', ['pass', 'fail'])).toBe(mysql.escape('fail'));
     expect(() => wordLiteral("pass'", ['pass', 'fail'] as string[])).toThrow(/not one of pass, fail/);
+    // Even a listed word is refused when it is not plain lower-case letters.
+    expect(() => wordLiteral("it's", ["it's"])).toThrow(/not one of it's/);
   });
 });

@@ -109,6 +109,8 @@ class RunWriter {
       }
       this.writeNext();
     });
+    // More than a batch's worth was waiting: the other slot need not wait for the next post.
+    if (this.batchesInFlight < maxBatchesInFlight && this.queue.length > 0) this.writeNow();
   }
 
   private takeBatch(): Pending[] {
@@ -121,6 +123,9 @@ class RunWriter {
       const fits = batch.length === 0 || measurements + judged.results.length <= maxMeasurementsPerBatch;
       const taken = serials.has(document.serial) || runIds.has(document.runId) || this.serialsInFlight.has(document.serial) || this.runIdsInFlight.has(document.runId);
       if (!fits || taken) {
+        // Its serial is passed over too: a later run of that serial must not get the earlier attempt.
+        serials.add(document.serial);
+        runIds.add(document.runId);
         i++;
         continue;
       }
