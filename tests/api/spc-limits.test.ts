@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import request from 'supertest';
+import type { Knex } from 'knex';
 import { startApiServer } from '../support/api-server.js';
 import { truncateAll } from '../support/migrate.js';
 import { signIn } from '../support/sign-in.js';
@@ -12,6 +13,21 @@ function normalValues(count: number, mean: number, sd: number, seed = 7): number
   let state = seed;
   const uniform = () => { state = (state * 1103515245 + 12345) % 2147483648; return (state + 1) / 2147483649; };
   return Array.from({ length: count }, () => mean + sd * Math.sqrt(-2 * Math.log(uniform())) * Math.cos(2 * Math.PI * uniform()));
+}
+
+/**
+ * Resolves once another connection of this user runs a statement on spc_state: the freeze, which
+ * cannot finish it while the batch holds the state (PROCESSLIST shows a user's own connections).
+ */
+async function waitForFreezeAtState(db: Knex): Promise<void> {
+  for (let i = 0; i < 200; i++) {
+    const [rows] = await db.raw(
+      "SELECT COUNT(*) AS n FROM information_schema.PROCESSLIST WHERE COMMAND = 'Query' AND INFO LIKE '%spc\\_state%' AND INFO NOT LIKE '%PROCESSLIST%'",
+    );
+    if (Number((rows as Array<{ n: number }>)[0].n) > 0) return;
+    await new Promise((resolve) => setTimeout(resolve, 25));
+  }
+  throw new Error('the freeze did not reach the SPC state within 5 s');
 }
 
 describe('SPC Phase I: trial limits, exclusions and the freeze', () => {
@@ -99,6 +115,33 @@ describe('SPC Phase I: trial limits, exclusions and the freeze', () => {
     const state = await server.db('spc_state').where({ characteristic_id: ke() }).first();
     expect(state.control_limit_id).toBe(trial.body.id);
     await post(`/api/v1/spc/control-limits/${trial.body.id}/freeze`, quality).expect(409);
+  });
+
+  it('when limits are frozen while an ingest batch holds the SPC state and then checks the frozen limits, then both finish without a deadlock', async () => {
+    await ingest(normalValues(100, 50, 0.3));
+    const first = await post(`/api/v1/spc/characteristics/${ke()}/trial-limits`, quality, { chartKind: 'individuals' }).expect(201);
+    await post(`/api/v1/spc/control-limits/${first.body.id}/freeze`, quality).expect(200);
+    const second = await post(`/api/v1/spc/characteristics/${ke()}/trial-limits`, quality, { chartKind: 'individuals' }).expect(201);
+
+    // An ingest batch in its own transaction: it locks the state, as the writer's second round
+    // trip does; its later writes (the state, a signal) check the frozen limits' key.
+    const batch = await server.db.transaction();
+    try {
+      await batch('spc_state').where({ characteristic_id: ke() }).forUpdate().first();
+      const freezing = post(`/api/v1/spc/control-limits/${second.body.id}/freeze`, quality).then((r) => r);
+      await waitForFreezeAtState(server.db);
+      await batch('control_limits').where({ id: first.body.id }).forShare().first('id');
+      await batch('spc_state').where({ characteristic_id: ke() }).update({ updated_at: new Date() });
+      await batch.commit();
+      const frozen = await freezing;
+      expect(frozen.status).toBe(200);
+      expect(frozen.body).toMatchObject({ id: second.body.id, status: 'frozen' });
+    } finally {
+      if (!batch.isCompleted()) await batch.rollback();
+    }
+    const statuses = await server.db('control_limits').where({ characteristic_id: ke() }).orderBy('id').pluck('status');
+    expect(statuses).toEqual(['superseded', 'frozen']);
+    expect((await server.db('spc_state').where({ characteristic_id: ke() }).first()).control_limit_id).toBe(second.body.id);
   });
 
   it('when an operator or a manager tries to compute or freeze limits, then the answer is 403 and nothing changes', async () => {

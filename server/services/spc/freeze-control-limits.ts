@@ -13,6 +13,11 @@ import { freshState } from './phase-two-step.js';
  */
 export async function freezeControlLimits(db: Knex, user: SessionUser, limitId: number, now = new Date()): Promise<ControlLimitView> {
   return db.transaction(async (trx) => {
+    // Locks in ingest's order: the characteristic's SPC state first, then its control limits. An
+    // ingest batch holds the state and then writes rows whose keys name the frozen limits (the
+    // state itself, signals); taking the limits first would deadlock with it.
+    const { characteristic_id: characteristicId } = await findLimitRow(trx, limitId);
+    await trx('spc_state').where({ characteristic_id: characteristicId }).forUpdate().first('characteristic_id');
     const row = await findLimitRow(trx, limitId, { lock: true });
     if (row.status !== 'trial') throw conflict(`Control limits ${limitId} are ${row.status}; only trial limits can be frozen.`);
     const previous = await trx('control_limits').where({ characteristic_id: row.characteristic_id, status: 'frozen' }).first('id');
