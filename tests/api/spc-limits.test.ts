@@ -128,6 +128,7 @@ describe('SPC Phase I: trial limits, exclusions and the freeze', () => {
     const batch = await server.db.transaction();
     try {
       await batch('spc_state').where({ characteristic_id: ke() }).forUpdate().first();
+      // then() sends the request now; the test goes on while the freeze waits for the state.
       const freezing = post(`/api/v1/spc/control-limits/${second.body.id}/freeze`, quality).then((r) => r);
       await waitForFreezeAtState(server.db);
       await batch('control_limits').where({ id: first.body.id }).forShare().first('id');

@@ -57,9 +57,11 @@ type Pending = { run: RunToStore; resolve: (outcome: IngestOutcome) => void; rej
 class RunWriter {
   private readonly queue: Pending[] = [];
   private readonly peak = new RecentPeak();
-  private writingCount = 0;
   private batchesInFlight = 0;
-  /** Serials and runIds of the batches being written: a run of one of them waits for a later batch. */
+  /**
+   * Serials and runIds of the batches being written: a run of one of them waits for a later batch.
+   * The serials of a batch are distinct, so there are as many serials as runs being written.
+   */
   private readonly serialsInFlight = new Set<string>();
   private readonly runIdsInFlight = new Set<string>();
   private gatherTimer: NodeJS.Timeout | undefined;
@@ -74,14 +76,14 @@ class RunWriter {
   store(run: RunToStore): Promise<IngestOutcome> {
     return new Promise((resolve, reject) => {
       this.queue.push({ run, resolve, reject });
-      this.peak.note(this.queue.length + this.writingCount, performance.now());
+      this.peak.note(this.queue.length + this.serialsInFlight.size, performance.now());
       this.writeNext();
     });
   }
 
   private writeNext(): void {
     if (this.batchesInFlight >= maxBatchesInFlight || this.queue.length === 0) return;
-    if (this.queue.length + this.writingCount < this.peak.value(performance.now())) {
+    if (this.queue.length + this.serialsInFlight.size < this.peak.value(performance.now())) {
       this.gatherTimer ??= setTimeout(() => this.writeNow(), gatherMs);
       return;
     }
@@ -95,14 +97,12 @@ class RunWriter {
     const batch = this.takeBatch();
     if (batch.length === 0) return; // every queued run waits for a batch in flight
     this.batchesInFlight++;
-    this.writingCount += batch.length;
     for (const p of batch) {
       this.serialsInFlight.add(p.run.document.serial);
       this.runIdsInFlight.add(p.run.document.runId);
     }
     void this.write(batch).finally(() => {
       this.batchesInFlight--;
-      this.writingCount -= batch.length;
       for (const p of batch) {
         this.serialsInFlight.delete(p.run.document.serial);
         this.runIdsInFlight.delete(p.run.document.runId);
