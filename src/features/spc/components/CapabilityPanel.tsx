@@ -41,7 +41,7 @@ export function CapabilityPanel({ characteristicId, window }: { characteristicId
               The data does not look normal (Anderson–Darling p = {study.normality.pValue.toPrecision(2)}): Cp/Cpk and the ppm estimate assume a normal distribution and may mislead.
             </p>
           ) : null}
-          <dl className="grid grid-cols-2 gap-x-4 gap-y-1 text-sm sm:grid-cols-5">
+          <dl className="grid grid-cols-2 gap-x-4 gap-y-1 text-sm sm:grid-cols-6">
             <dt className="text-graphite-500">Cp</dt><dd className="figures">{fmt(study.cp)}</dd>
             <dt className="text-graphite-500">Cpk (95 %)</dt><dd className="figures">{fmt(study.cpk)} ({fmt(study.cpkLower95)}–{fmt(study.cpkUpper95)})</dd>
             <dt className="text-graphite-500">Pp</dt><dd className="figures">{fmt(study.pp)}</dd>
