@@ -6,6 +6,7 @@ import type { RunningServer } from '../../server/index.js';
 import { statementPool } from '../../server/db/knex.js';
 import { directTransaction } from '../../server/db/direct-transaction.js';
 import type { Statement } from '../../server/db/statements.js';
+import { jsonValue } from '../../server/db/sql-literals.js';
 
 // The ingest writer's transaction is driven by hand on the multi-statement pool: START
 // TRANSACTION rides with the first statements, COMMIT with the last. It must be all or nothing.
@@ -56,5 +57,17 @@ describe('a transaction driven by hand on the multi-statement pool', () => {
     const broken: Statement = { sql: 'INSERT INTO app_meta (meta_key, meta_value, updated_at) VALUES (?, ?, ?)', bindings: ['probe-1', undefined, new Date()] };
     await expect(directTransaction(pool, (send) => send([broken], { last: true }))).rejects.toThrow(/undefined binding/);
     expect(await keys()).toEqual([]);
+  });
+
+  it('when a JSON value is bound as its own SQL text, then MariaDB reads back the JSON text, and the placeholders after it still bind', async () => {
+    // The stored answer of each run is written this way (jsonValue); the reference is JSON.stringify read back unchanged.
+    const values = [
+      { note: "it's a \\ \"quoted\" ? line\nbreak", unit: 'µV', emoji: '😀', nul: '\u0000', ctrlZ: '\u001a', tab: '\t' },
+      ['?', "'", '\\', "\\'", '--', '/*', '#'],
+      { results: Array.from({ length: 40 }, (_, i) => ({ characteristic: `c${i}`, value: i / 7, lsl: null, verdict: 'pass' })) },
+    ];
+    const rows = await directTransaction(pool, (send) => send(values.map((value) => ({ sql: 'SELECT ? AS json, ? AS after', bindings: [jsonValue(value), 'bound?'] })), { last: true })) as Array<Array<{ json: string; after: string }>>;
+    expect(rows.map(([row]) => row.json)).toEqual(values.map((value) => JSON.stringify(value)));
+    expect(rows.map(([row]) => row.after)).toEqual(values.map(() => 'bound?'));
   });
 });

@@ -3,7 +3,7 @@ import { invalid } from '../../errors.js';
 import type { ResultInput, TestRunDocument, TestRunResponse } from '../../schemas/test-run.js';
 import { motorsForRunsStatement, pointMotorsAtRunsStatement } from '../motors/refresh-motor-status.js';
 import { runStatements, TransactionNeeded, type Statement } from '../../db/statements.js';
-import { numberLiteral, wordLiteral } from '../../db/sql-literals.js';
+import { jsonValue, numberLiteral, wordLiteral } from '../../db/sql-literals.js';
 import { placeHold } from '../holds/place-hold.js';
 import { signalWouldOpen, spcStateLockStatement, spcStateReadStatement, spcStatementsAfterIngest, type IngestedRun, type SpcStateRow } from '../spc/evaluate-after-ingest.js';
 import { yieldStatementsAfterIngest } from '../yield/update-yield-rollups.js';
@@ -146,7 +146,7 @@ function insertRunsStatement(stored: readonly StoredRun[]): Statement {
     bindings: stored.flatMap(({ run, motorId, attempt, calibrationOk, response }) => [
       run.document.runId, motorId, run.station.id, run.lotId, attempt, new Date(run.document.startedAt), new Date(run.document.finishedAt),
       run.document.operatorBadge, run.document.programVersion, run.limitSet.id, run.judged.verdict, calibrationOk, run.station.calibrationDue,
-      run.sha256, JSON.stringify(response), run.source, run.receivedAt,
+      run.sha256, jsonValue(response), run.source, run.receivedAt,
     ]),
   };
 }

@@ -2,14 +2,14 @@ import { jsonColumn } from '../../db/json-column.js';
 import { createHash } from 'node:crypto';
 import type { Knex } from 'knex';
 import { conflict } from '../../errors.js';
-import { canonicalJson } from '../audit/hash.js';
+import { plainDataCanonicalJson } from '../audit/hash.js';
 import type { TestRunDocument, TestRunResponse } from '../../schemas/test-run.js';
 
 export type IngestOutcome = { status: 201 | 200; body: TestRunResponse };
 
 /** SHA-256 of the document with its keys sorted, so key order and whitespace do not count. */
 export function bodySha256(document: TestRunDocument): string {
-  return createHash('sha256').update(canonicalJson(document)).digest('hex');
+  return createHash('sha256').update(plainDataCanonicalJson(document)).digest('hex');
 }
 
 /**
