@@ -1,4 +1,13 @@
 import { readdirSync, readFileSync } from 'node:fs';
+import { execFileSync } from 'node:child_process';
+
+let clockTicksPerSecond: number | undefined;
+/** The clock ticks per second of /proc's CPU times (USER_HZ), as `getconf CLK_TCK` reports it. */
+function userHz(): number {
+  clockTicksPerSecond ??= Number(execFileSync('getconf', ['CLK_TCK'], { encoding: 'utf8' }).trim());
+  if (!(clockTicksPerSecond > 0)) throw new Error('getconf CLK_TCK gave no tick rate');
+  return clockTicksPerSecond;
+}
 
 /** Percentile of a sample by the nearest-rank method (sorted copy). */
 export function percentile(values: number[], p: number): number {
@@ -49,8 +58,7 @@ export async function runPool(count: number, concurrency: number, job: (i: numbe
 export function machineBusyCpuMs(): number {
   const [cpu] = readFileSync('/proc/stat', 'utf8').split('\n');
   const [, user, nice, system, , , irq, softirq, steal] = cpu.trim().split(/\s+/).map(Number);
-  const ticksPerSecond = 100; // USER_HZ on Linux
-  return ((user + nice + system + irq + softirq + steal) / ticksPerSecond) * 1000;
+  return ((user + nice + system + irq + softirq + steal) / userHz()) * 1000;
 }
 
 /**
@@ -86,8 +94,8 @@ function processStat(pid: number): { cpuMs: number; parent: number } | null {
   try {
     const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
     const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
-    // Fields 4, 14 and 15 of proc(5): ppid, utime and stime, the times in USER_HZ (100) ticks.
-    return { parent: Number(fields[1]), cpuMs: ((Number(fields[11]) + Number(fields[12])) / 100) * 1000 };
+    // Fields 4, 14 and 15 of proc(5): ppid, utime and stime, the times in USER_HZ ticks.
+    return { parent: Number(fields[1]), cpuMs: ((Number(fields[11]) + Number(fields[12])) / userHz()) * 1000 };
   } catch {
     return null;
   }

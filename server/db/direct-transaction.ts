@@ -1,7 +1,10 @@
 import type { Knex } from 'knex';
 import type { Statement } from './statements.js';
 
-type Connection = { query(sql: string, values: unknown[], callback: (error: Error | null, results: unknown) => void): void };
+type Connection = {
+  query(sql: string, callback: (error: Error | null, results: unknown) => void): void;
+  format(sql: string, values: readonly unknown[]): string;
+};
 
 /** An undefined binding would be written as NULL by the driver; knex refuses it, and so do we. */
 function assertBound(statements: readonly Statement[]): void {
@@ -14,7 +17,11 @@ function assertBound(statements: readonly Statement[]): void {
 function query(connection: Connection, statements: readonly Statement[]): Promise<unknown[]> {
   assertBound(statements);
   return new Promise((resolve, reject) => {
-    connection.query(statements.map((s) => s.sql).join(';\n'), statements.flatMap((s) => s.bindings), (error, results) => {
+    // Each statement's values are put in by the driver's own formatting, statement by statement:
+    // given all values at once, it would scan the whole text for placeholders, and an ingest
+    // batch's measurements statement is long and has none.
+    const sql = statements.map((s) => (s.bindings.length === 0 ? s.sql : connection.format(s.sql, s.bindings))).join(';\n');
+    connection.query(sql, (error, results) => {
       if (error) reject(error);
       else resolve(statements.length === 1 ? [results] : results as unknown[]);
     });
