@@ -1,5 +1,6 @@
 import { createHash } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
+import { createPrng } from '../../seeds/demo/prng.js';
 import { auditHash, canonicalJson, chainHash, genesisHash, plainDataCanonicalJson, storedContentJson, type AuditContent } from '../../server/services/audit/hash.js';
 
 const approval: AuditContent = {
@@ -63,27 +64,23 @@ describe('audit chain hashing', () => {
   });
 
   it('when random plain data is made canonical, then both forms write the same text', () => {
-    // A seeded generator (mulberry32, a common-practice small PRNG) so a failure can be replayed.
-    let seed = 20261202;
-    const random = () => {
-      seed = (seed + 0x6d2b79f5) | 0;
-      let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-      t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-      return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-    };
-    const pick = <T>(items: readonly T[]): T => items[Math.floor(random() * items.length)];
+    const prng = createPrng(20261202); // seeded, so a failure can be replayed
     const keys = ['a', 'b', 'Z', '10', '2', 'value', 'unit', 'é', '😀', '', 'a b', '"q"', 'runId', 'results', '__proto__'];
     const scalars = [0, -0, 1.5, -2e-9, 1e21, 'text', 'q"\\\n', '😀', true, false, null];
     const value = (depth: number): unknown => {
-      const kind = depth > 3 ? 0 : Math.floor(random() * 3);
-      if (kind === 0) return pick(scalars);
-      if (kind === 1) return Array.from({ length: Math.floor(random() * 4) }, () => value(depth + 1));
+      const kind = depth > 3 ? 0 : prng.int(0, 2);
+      if (kind === 0) return prng.pick(scalars);
+      if (kind === 1) return Array.from({ length: prng.int(0, 3) }, () => value(depth + 1));
       // Built as JSON.parse builds objects (own data properties, "__proto__" included).
-      return JSON.parse(`{${Array.from({ length: Math.floor(random() * 5) }, () => `${JSON.stringify(pick(keys))}:${JSON.stringify(value(depth + 1))}`).join(',')}}`);
+      return JSON.parse(`{${Array.from({ length: prng.int(0, 4) }, () => `${JSON.stringify(prng.pick(keys))}:${JSON.stringify(value(depth + 1))}`).join(',')}}`);
     };
+    let withoutProtoKey = 0;
     for (let i = 0; i < 500; i++) {
       const sample = value(0);
       expect(plainDataCanonicalJson(sample)).toBe(canonicalJson(sample));
+      if (!canonicalJson(sample).includes('"__proto__"')) withoutProtoKey++;
     }
+    // Most samples take the property-list path, not the fallback for a "__proto__" key.
+    expect(withoutProtoKey).toBeGreaterThan(250);
   });
 });
